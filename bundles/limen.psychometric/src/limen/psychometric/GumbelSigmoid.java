@@ -1,0 +1,52 @@
+package limen.psychometric;
+
+/**
+ * F(x) = 1 − exp(−exp((x − M)/S)), the log-Weibull; see {@link Sigmoids#GUMBEL}.
+ */
+final class GumbelSigmoid implements Sigmoid {
+
+    @Override
+    public String name() {
+        return "gumbel";
+    }
+
+    @Override
+    public String locationName() {
+        return "mid";
+    }
+
+    @Override
+    public String spreadName() {
+        return "scale";
+    }
+
+    @Override
+    public double value(double x, double location, double spread) {
+        checkParameters(location, spread);
+        return -Math.expm1(-Math.exp((x - location) / spread));
+    }
+
+    @Override
+    public double derivative(double x, double location, double spread) {
+        checkParameters(location, spread);
+        double e = Math.exp((x - location) / spread);
+        return e == Double.POSITIVE_INFINITY ? 0.0 : e * Math.exp(-e) / spread;
+    }
+
+    @Override
+    public double inverse(double p, double location, double spread) {
+        checkParameters(location, spread);
+        Sigmoids.checkProportion(this, p);
+        return location + spread * Math.log(-Math.log1p(-p));
+    }
+
+    @Override
+    public boolean positiveDomainOnly() {
+        return false;
+    }
+
+    @Override
+    public String toString() {
+        return name();
+    }
+}

@@ -1,0 +1,57 @@
+package limen.psychometric;
+
+/** F(x) = 1 / (1 + exp(−(x − M)/S)); see {@link Sigmoids#LOGISTIC}. */
+final class LogisticSigmoid implements Sigmoid {
+
+    @Override
+    public String name() {
+        return "logistic";
+    }
+
+    @Override
+    public String locationName() {
+        return "mid";
+    }
+
+    @Override
+    public String spreadName() {
+        return "scale";
+    }
+
+    @Override
+    public double value(double x, double location, double spread) {
+        checkParameters(location, spread);
+        double z = (x - location) / spread;
+        // Written so that neither branch overflows: exp of a non-positive number only.
+        if (z >= 0) {
+            return 1.0 / (1.0 + Math.exp(-z));
+        }
+        double e = Math.exp(z);
+        return e / (1.0 + e);
+    }
+
+    @Override
+    public double derivative(double x, double location, double spread) {
+        checkParameters(location, spread);
+        double e = Math.exp(-Math.abs((x - location) / spread));
+        // F(1 − F)/S, symmetric in z; computed from exp(−|z|) to stay finite in the tails.
+        return e / ((1.0 + e) * (1.0 + e) * spread);
+    }
+
+    @Override
+    public double inverse(double p, double location, double spread) {
+        checkParameters(location, spread);
+        Sigmoids.checkProportion(this, p);
+        return location + spread * Math.log(p / (1.0 - p));
+    }
+
+    @Override
+    public boolean positiveDomainOnly() {
+        return false;
+    }
+
+    @Override
+    public String toString() {
+        return name();
+    }
+}

@@ -1,0 +1,71 @@
+package limen.psychometric;
+
+/**
+ * F(x) = 1 − exp(−(x/A)^B) for x &gt; 0, 0 for x &le; 0; see {@link Sigmoids#WEIBULL}. The location
+ * is the scale A (alpha, F(A) = 1 − 1/e) and the "spread" slot holds the shape B (beta), which
+ * grows as the function steepens.
+ */
+final class WeibullSigmoid implements Sigmoid {
+
+    @Override
+    public String name() {
+        return "weibull";
+    }
+
+    @Override
+    public String locationName() {
+        return "alpha";
+    }
+
+    @Override
+    public String spreadName() {
+        return "beta";
+    }
+
+    @Override
+    public void checkParameters(double location, double spread) {
+        if (!(location > 0) || !Double.isFinite(location)) {
+            throw new IllegalArgumentException("weibull: alpha must be finite and > 0, was " + location);
+        }
+        if (!(spread > 0) || !Double.isFinite(spread)) {
+            throw new IllegalArgumentException("weibull: beta must be finite and > 0, was " + spread);
+        }
+    }
+
+    @Override
+    public double value(double x, double location, double spread) {
+        checkParameters(location, spread);
+        if (!(x > 0)) {
+            return 0.0;
+        }
+        // −expm1 keeps relative accuracy where F is tiny.
+        return -Math.expm1(-Math.pow(x / location, spread));
+    }
+
+    @Override
+    public double derivative(double x, double location, double spread) {
+        checkParameters(location, spread);
+        if (!(x > 0)) {
+            return 0.0;
+        }
+        double u = Math.pow(x / location, spread);
+        return spread * u / x * Math.exp(-u);
+    }
+
+    @Override
+    public double inverse(double p, double location, double spread) {
+        checkParameters(location, spread);
+        Sigmoids.checkProportion(this, p);
+        return location * Math.pow(-Math.log1p(-p), 1.0 / spread);
+    }
+
+    @Override
+    public boolean positiveDomainOnly() {
+        return true;
+    }
+
+    @Override
+    public String toString() {
+        return name();
+    }
+}
