@@ -100,6 +100,19 @@ class SigmoidsTest {
     }
 
     @Test
+    void complementIsOneMinusValueAndKeepsTheUpperTail() {
+        for (Sigmoid s : Sigmoids.builtIns()) {
+            for (double x : new double[] { 0.3, 1.0, 2.0, 4.0 }) {
+                assertEquals(1 - s.value(x, 2.0, 0.5), s.complementValue(x, 2.0, 0.5), 1e-15, s.name());
+            }
+        }
+        // far upper tail: 1 − F is representable even where F rounds to 1
+        assertEquals(Math.exp(-40) / (1 + Math.exp(-40)), Sigmoids.LOGISTIC.complementValue(40, 0, 1), 1e-30);
+        assertEquals(Sigmoids.NORMAL.value(-12, 0, 1), Sigmoids.NORMAL.complementValue(12, 0, 1), 0.0);
+        assertEquals(Math.exp(-Math.pow(5, 3)), Sigmoids.WEIBULL.complementValue(5, 1, 3), 1e-70);
+    }
+
+    @Test
     void monotoneFromZeroToOne() {
         for (Sigmoid s : Sigmoids.builtIns()) {
             double prev = -1;

@@ -27,6 +27,12 @@ final class GumbelSigmoid implements Sigmoid {
     }
 
     @Override
+    public double complementValue(double x, double location, double spread) {
+        checkParameters(location, spread);
+        return Math.exp(-Math.exp((x - location) / spread));
+    }
+
+    @Override
     public double derivative(double x, double location, double spread) {
         checkParameters(location, spread);
         double e = Math.exp((x - location) / spread);

@@ -31,6 +31,12 @@ final class LogisticSigmoid implements Sigmoid {
     }
 
     @Override
+    public double complementValue(double x, double location, double spread) {
+        checkParameters(location, spread);
+        return value(-x, -location, spread); // 1 − F(z) = F(−z) by symmetry
+    }
+
+    @Override
     public double derivative(double x, double location, double spread) {
         checkParameters(location, spread);
         double e = Math.exp(-Math.abs((x - location) / spread));

@@ -34,6 +34,12 @@ final class NormalSigmoid implements Sigmoid {
     }
 
     @Override
+    public double complementValue(double x, double location, double spread) {
+        checkParameters(location, spread);
+        return phi(-(x - location) / spread); // 1 − Φ(z) = Φ(−z)
+    }
+
+    @Override
     public double derivative(double x, double location, double spread) {
         checkParameters(location, spread);
         double z = (x - location) / spread;

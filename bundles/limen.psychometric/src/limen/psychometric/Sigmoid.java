@@ -31,6 +31,14 @@ public interface Sigmoid {
     double value(double x, double location, double spread);
 
     /**
+     * @return 1 − F(x), computed without cancellation where F is close to 1 (the default subtracts; the
+     *         built-in families override it)
+     */
+    default double complementValue(double x, double location, double spread) {
+        return 1.0 - value(x, location, spread);
+    }
+
+    /**
      * @return dF/dx at x, non-negative
      */
     double derivative(double x, double location, double spread);

@@ -43,6 +43,12 @@ final class WeibullSigmoid implements Sigmoid {
     }
 
     @Override
+    public double complementValue(double x, double location, double spread) {
+        checkParameters(location, spread);
+        return x > 0 ? Math.exp(-Math.pow(x / location, spread)) : 1.0;
+    }
+
+    @Override
     public double derivative(double x, double location, double spread) {
         checkParameters(location, spread);
         if (!(x > 0)) {
