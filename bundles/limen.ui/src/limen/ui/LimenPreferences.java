@@ -23,9 +23,11 @@ public final class LimenPreferences {
     public static final String SAMPLE_RATE_HZ = "sampleRateHz";
 
     private final PreferenceStore store;
+    private final Path file;
 
-    private LimenPreferences(PreferenceStore store) {
+    private LimenPreferences(PreferenceStore store, Path file) {
         this.store = store;
+        this.file = file;
     }
 
     /** Opens (creating if needed) the store at its usual place. */
@@ -44,7 +46,7 @@ public final class LimenPreferences {
             if (Files.exists(file)) {
                 store.load();
             }
-            LimenPreferences prefs = new LimenPreferences(store);
+            LimenPreferences prefs = new LimenPreferences(store, file);
             prefs.setDefaults();
             return prefs;
         } catch (IOException e) {
@@ -84,7 +86,7 @@ public final class LimenPreferences {
         try {
             store.save();
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot save preferences " + store.getFilename() + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot save preferences " + file + ": " + e.getMessage(), e);
         }
     }
 }
