@@ -27,13 +27,24 @@ public final class StatusLine {
         Composite box = new Composite(parent, SWT.NONE);
         GridLayout layout = new GridLayout(2, false);
         layout.marginHeight = 2;
+        layout.marginWidth = 6;
         box.setLayout(layout);
         message = new Label(box, SWT.NONE);
         message.setText("Ready");
-        message.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        GridData grow = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        grow.widthHint = 700;
+        message.setLayoutData(grow);
         Label notice = new Label(box, SWT.NONE);
         notice.setText("Research use only: not a clinical audiometer");
         notice.setToolTipText(limen.core.About.RESEARCH_CAUTION);
+        box.pack();
+        // The window's trim layout runs before GTK has placed the menu bar, which leaves the bottom trim
+        // below the client area; lay the window out again once it is showing.
+        box.getDisplay().asyncExec(() -> {
+            if (!box.isDisposed()) {
+                box.getShell().layout(true, true);
+            }
+        });
     }
 
     @Inject

@@ -25,7 +25,9 @@ import org.junit.jupiter.api.io.TempDir;
 /** Starts the built product as a user would, and looks at it. */
 class WorkbenchStartsTest {
 
-    private static final Pattern WINDOW_ID = Pattern.compile("Window id: (0x[0-9a-f]+) \"Limen\"");
+    /** A line of {@code xwininfo -root -tree}: id, "title", (class), WxH+X+Y. */
+    private static final Pattern TREE_LINE = Pattern.compile(
+            "^\\s*(0x[0-9a-f]+) \"([^\"]*)\":.*?\\s(\\d+)x(\\d+)\\+-?\\d+\\+-?\\d+", Pattern.MULTILINE);
 
     @TempDir
     Path temp;
@@ -78,10 +80,13 @@ class WorkbenchStartsTest {
             if (!workbench.isAlive()) {
                 return null;
             }
-            String out = run("xwininfo", "-name", "Limen");
-            Matcher m = WINDOW_ID.matcher(out);
-            if (m.find()) {
-                return m.group(1);
+            // GTK makes several small helper windows with the same name: take the real, large one
+            Matcher m = TREE_LINE.matcher(run("xwininfo", "-root", "-tree"));
+            while (m.find()) {
+                if (m.group(2).trim().equals("Limen") && Integer.parseInt(m.group(3)) > 400
+                        && Integer.parseInt(m.group(4)) > 300) {
+                    return m.group(1);
+                }
             }
             Thread.sleep(500);
         }
