@@ -1,0 +1,255 @@
+package limen.fit;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Objects;
+
+import org.apache.commons.math3.analysis.MultivariateFunction;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.apache.commons.math3.optim.InitialGuess;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.PointValuePair;
+import org.apache.commons.math3.optim.SimpleBounds;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
+import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.BOBYQAOptimizer;
+
+import limen.fit.internal.FisherScoring;
+import limen.fit.internal.Objective;
+import limen.psychometric.PsychometricFunction;
+
+/**
+ * Maximum-likelihood fit of ψ(x) = γ + (1 − γ − λ) F(x) to binomial data, after Wichmann &amp; Hill
+ * (2001a), Perception &amp; Psychophysics 63(8), 1293-1313: maximise
+ * ln L = Σ k_i ln ψ(x_i) + (n_i − k_i) ln(1 − ψ(x_i)) over location, spread and, where free, γ in
+ * [0, γmax] and λ in [0, λmax].
+ * <p>
+ * Method: the parameters are mapped to dimensionless working coordinates (location in units of the data
+ * range, log of the scale, γ/γmax, λ/λmax; the Weibull on ln x) inside the box location ∈ centre ± 3 ranges,
+ * scale ∈ [range/1000, 100 range]. A grid of {@value #GRID_LOCATIONS} × {@value #GRID_SCALES} locations and
+ * scales is evaluated; from the best grid point and from the best one at least {@value #DISTINCT_START}
+ * working units away, box-constrained Fisher scoring (the fast path, {@code FisherScoring}) climbs to the
+ * maximum; where it fails (singular information, e.g. separated data) Powell's derivative-free bounded
+ * optimiser BOBYQA (Commons Math {@link BOBYQAOptimizer}; Powell 2009, Cambridge report DAMTP 2009/NA06)
+ * takes over. The better optimum wins. Cells at 0% and 100% need no special handling (0 ln 0 = 0).
+ * <p>
+ * Refuses, with {@link NotIdentifiableException}, data with fewer than 2 distinct values or with every
+ * cell at the same proportion. Thread-safe: every fit uses its own optimiser.
+ */
+public final class PsychometricFitter {
+
+    static final int GRID_LOCATIONS = 9;
+    static final int GRID_SCALES = 5;
+    static final double DISTINCT_START = 0.3;
+    private static final double INITIAL_RADIUS = 0.2;
+    private static final double STOPPING_RADIUS = 1e-9;
+    private static final int MAX_EVALUATIONS = 5000;
+    private static final double BOUND_TOLERANCE = 1e-6;
+    /** A log-likelihood difference too small to matter (far below the 0.5 of a 1-sd likelihood interval). */
+    private static final double FLAT_LOG_LIKELIHOOD = 1e-6;
+
+    private final FitOptions options;
+
+    public PsychometricFitter(FitOptions options) {
+        this.options = Objects.requireNonNull(options, "options");
+    }
+
+    public FitOptions options() {
+        return options;
+    }
+
+    /**
+     * @return the maximum-likelihood fit
+     * @throws NotIdentifiableException when the data cannot identify the function
+     * @throws IllegalArgumentException for data outside the family's domain (the Weibull needs x &gt; 0)
+     */
+    public FitResult fit(BinomialData data) {
+        checkIdentifiable(data);
+        return fit(data, null);
+    }
+
+    /**
+     * Fit without the identifiability refusal (the bootstrap keeps its replicates' bounded optimum) and with
+     * an extra start, e.g. the original estimate.
+     */
+    FitResult fit(BinomialData data, PsychometricFunction extraStart) {
+        return fit(data, extraStart, false);
+    }
+
+    /** @param derivativeFreeOnly skip Fisher scoring (tests compare the two optimisers) */
+    FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly) {
+        Objective objective = new Objective(data, options);
+        List<PointValuePair> starts = starts(objective, data, extraStart);
+        double[] best = null;
+        double bestValue = Double.POSITIVE_INFINITY;
+        List<double[]> used = new ArrayList<>();
+        for (PointValuePair start : starts) {
+            if (used.size() == 2) {
+                break;
+            }
+            if (used.stream().anyMatch(u -> distance(u, start.getPointRef()) < DISTINCT_START)) {
+                continue;
+            }
+            used.add(start.getPointRef());
+            double[] p = derivativeFreeOnly ? null : FisherScoring.maximise(objective, start.getPoint());
+            if (p == null) {
+                p = boundedSearch(objective, start.getPoint());
+            }
+            double v = objective.value(p);
+            if (v < bestValue) {
+                best = p;
+                bestValue = v;
+            }
+        }
+        PsychometricFunction f = objective.function(best);
+        return new FitResult(data, options, f, warnings(objective, best, f, data), objective.evaluations());
+    }
+    private List<PointValuePair> starts(Objective objective, BinomialData data, PsychometricFunction extraStart) {
+        double minP = 1;
+        double maxP = 0;
+        for (int i = 0; i < data.size(); i++) {
+            minP = Math.min(minP, data.proportion(i));
+            maxP = Math.max(maxP, data.proportion(i));
+        }
+        double guess0 = clamp(minP, 0.1 * options.guessMax(), 0.9 * options.guessMax());
+        double lapse0 = clamp(1 - maxP, 0.1 * options.lapseMax(), 0.9 * options.lapseMax());
+        List<PointValuePair> candidates = new ArrayList<>();
+        for (int i = 0; i < GRID_LOCATIONS; i++) {
+            double c0 = -0.6 + 1.2 * i / (GRID_LOCATIONS - 1);
+            for (int j = 0; j < GRID_SCALES; j++) {
+                double c1 = Math.log(0.02) + (Math.log(1.0) - Math.log(0.02)) * j / (GRID_SCALES - 1);
+                double[] c = objective.coordinates(c0, c1, guess0, lapse0);
+                candidates.add(new PointValuePair(c, objective.value(c), false));
+            }
+        }
+        if (extraStart != null) {
+            double[] c = objective.coordinates(extraStart);
+            candidates.add(new PointValuePair(c, objective.value(c), false));
+        }
+        candidates.sort(Comparator.comparingDouble(PointValuePair::getValue));
+        return candidates;
+    }
+
+    /**
+     * BOBYQA in the working box. Commons Math's implementation can stop with "trust region step has failed to
+     * reduce Q" near a degenerate optimum; then it restarts once with a smaller radius from the best point
+     * seen, and otherwise keeps that point.
+     */
+    private static double[] boundedSearch(Objective objective, double[] start) {
+        BestPoint tracked = new BestPoint(objective);
+        double radius = INITIAL_RADIUS;
+        double[] from = start;
+        for (int attempt = 0; attempt < 2; attempt++, radius *= 0.1) {
+            int dim = objective.dimension();
+            BOBYQAOptimizer optimizer = new BOBYQAOptimizer(2 * dim + 1, radius, STOPPING_RADIUS);
+            try {
+                return optimizer.optimize(new MaxEval(MAX_EVALUATIONS), new ObjectiveFunction(tracked), GoalType.MINIMIZE,
+                        new InitialGuess(from), new SimpleBounds(objective.lowerBounds(), objective.upperBounds())).getPoint();
+            } catch (MathIllegalStateException e) {
+                from = tracked.point.clone();
+            }
+        }
+        return tracked.point.clone();
+    }
+
+    /** Remembers the best point an optimiser has evaluated. */
+    private static final class BestPoint implements MultivariateFunction {
+        private final Objective objective;
+        double[] point;
+        double value = Double.POSITIVE_INFINITY;
+
+        BestPoint(Objective objective) {
+            this.objective = objective;
+        }
+
+        @Override
+        public double value(double[] c) {
+            double v = objective.value(c);
+            if (v < value) {
+                value = v;
+                point = c.clone();
+            }
+            return v;
+        }
+    }
+
+    private List<String> warnings(Objective objective, double[] c, PsychometricFunction f, BinomialData data) {
+        List<String> w = new ArrayList<>();
+        double[] lo = objective.lowerBounds();
+        double[] hi = objective.upperBounds();
+        if (c[0] <= lo[0] + BOUND_TOLERANCE || c[0] >= hi[0] - BOUND_TOLERANCE) {
+            w.add("location " + f.location() + " is at the edge of the search range (3 data ranges beyond the data): "
+                    + "the data do not locate the function");
+        }
+        // Separated data keep improving, ever more slowly, as the scale shrinks; the optimiser stops once the
+        // gain is below rounding. So ask directly whether the steepest allowed function fits as well.
+        double[] steepest = c.clone();
+        steepest[1] = lo[1];
+        boolean steepAsGood = objective.value(steepest) <= objective.value(c) + FLAT_LOG_LIKELIHOOD;
+        if (c[1] <= lo[1] + BOUND_TOLERANCE || steepAsGood) {
+            w.add(f.sigmoid().spreadName() + " " + f.spread() + " is at or near the steep end of the search range: "
+                    + "the data are consistent with a step and do not constrain the slope");
+        } else if (c[1] >= hi[1] - BOUND_TOLERANCE) {
+            w.add(f.sigmoid().spreadName() + " " + f.spread() + " is at the shallow end of the search range: "
+                    + "the function is nearly flat over the data");
+        }
+        if (options.lapseFree() && f.lapse() >= options.lapseMax() * (1 - BOUND_TOLERANCE)) {
+            w.add("lapse rate is at its upper bound " + options.lapseMax());
+        }
+        if (options.guessFree() && f.guess() >= options.guessMax() * (1 - BOUND_TOLERANCE)) {
+            w.add("guess rate is at its upper bound " + options.guessMax());
+        }
+        int distinct = data.distinctValues();
+        if (distinct < options.freeParameters()) {
+            w.add("only " + distinct + " distinct stimulus values for " + options.freeParameters()
+                    + " free parameters: the estimate is not unique");
+        }
+        if (Double.isNaN(FitResult.thresholdOf(f, options))) {
+            w.add("the fitted function does not reach the target proportion " + options.targetPsi() + " (its range is "
+                    + f.guess() + " to " + (1 - f.lapse()) + ")");
+        }
+        return w;
+    }
+
+    /**
+     * @throws NotIdentifiableException for fewer than 2 distinct values or all cells at one proportion
+     */
+    static void checkIdentifiable(BinomialData data) {
+        if (data.distinctValues() < 2) {
+            throw new NotIdentifiableException("the data have " + data.distinctValues()
+                    + " distinct stimulus value (" + data.value(0) + "); at least 2 are needed to identify a location and a spread");
+        }
+        double p = data.proportion(0);
+        boolean same = true;
+        for (int i = 1; i < data.size() && same; i++) {
+            same = data.proportion(i) == p;
+        }
+        if (same) {
+            throw new NotIdentifiableException("every cell has the same proportion correct (" + p
+                    + "): the data cannot identify where the function rises");
+        }
+    }
+
+    private static double distance(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) {
+            s += (a[i] - b[i]) * (a[i] - b[i]);
+        }
+        return Math.sqrt(s);
+    }
+
+    private static double clamp(double v, double lo, double hi) {
+        return Math.max(lo, Math.min(hi, v));
+    }
+
+    @Override
+    public String toString() {
+        return "PsychometricFitter[" + options + "]";
+    }
+
+    static String describe(double[] c) {
+        return Arrays.toString(c);
+    }
+}
