@@ -1,0 +1,102 @@
+package limen.bench;
+
+import java.util.SplittableRandom;
+import java.util.concurrent.TimeUnit;
+
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Threads;
+import org.openjdk.jmh.annotations.Warmup;
+
+import limen.procedure.PsiMethod;
+import limen.procedure.PsiSettings;
+import limen.procedure.StopRule;
+import limen.procedure.internal.PsiTables;
+import limen.psychometric.PsychometricFunction;
+import limen.psychometric.Sigmoids;
+
+/**
+ * One Psi-method trial selection (Kontsevich &amp; Tyler 1999) on 100 thresholds × 40 spreads × 5 lapse rates
+ * = 20,000 parameter points and 61 candidate values: one pass over the precomputed (ψ, h(ψ)) table,
+ * 61 × 20,000 × 2 floats = 9.8 MB. The baseline streams a float array of the same size (a sum with four
+ * accumulators): the memory-bandwidth floor of any single pass over that table. Sample mode, so JMH prints
+ * the median (p0.50) beside the mean; one thread.
+ */
+@State(Scope.Benchmark)
+@BenchmarkMode(Mode.SampleTime)
+@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@Warmup(iterations = 3, time = 2)
+@Measurement(iterations = 5, time = 2)
+@Fork(1)
+@Threads(1)
+public class PsiSelectionBench {
+
+    private PsiTables tables;
+    private double[] posterior;
+    private float[] sameBytes;
+
+    @Setup
+    public void setUp() {
+        double[] thresholds = grid(-5, 5, 100);
+        double[] spreads = new double[40];
+        for (int i = 0; i < spreads.length; i++) {
+            spreads[i] = 0.1 * Math.pow(1.1, i);
+        }
+        double[] lapses = {0, 0.01, 0.02, 0.04, 0.06};
+        double[] candidates = grid(-6, 6, 61);
+        PsiSettings settings = PsiSettings.builder().family(Sigmoids.LOGISTIC).guess(0.5).thresholds(thresholds)
+                .spreads(spreads).lapses(lapses).candidates(candidates).prior(0, 2).stop(StopRule.afterTrials(1000))
+                .build();
+        // a posterior shaped by 30 simulated trials, as in a running session
+        PsiMethod psi = settings.create(new SplittableRandom(1));
+        PsychometricFunction listener = new PsychometricFunction(Sigmoids.LOGISTIC, 0.7, 0.8, 0.5, 0.02);
+        SplittableRandom rng = new SplittableRandom(2);
+        for (int t = 0; t < 30; t++) {
+            double x = psi.nextValue();
+            psi.record(x, rng.nextDouble() < listener.psi(x));
+        }
+        posterior = psi.posterior();
+        tables = PsiTables.of(Sigmoids.LOGISTIC, 0.5, thresholds, spreads, lapses, candidates);
+        sameBytes = new float[tables.candidates() * tables.points() * 2];
+        for (int i = 0; i < sameBytes.length; i++) {
+            sameBytes[i] = (float) rng.nextDouble();
+        }
+    }
+
+    private static double[] grid(double lo, double hi, int n) {
+        double[] g = new double[n];
+        for (int i = 0; i < n; i++) {
+            g[i] = lo + (hi - lo) * i / (n - 1);
+        }
+        return g;
+    }
+
+    @Benchmark
+    public double baselineStreamSameBytes() {
+        final float[] a = sameBytes;
+        double s0 = 0, s1 = 0, s2 = 0, s3 = 0;
+        int i = 0;
+        for (; i + 3 < a.length; i += 4) {
+            s0 += a[i];
+            s1 += a[i + 1];
+            s2 += a[i + 2];
+            s3 += a[i + 3];
+        }
+        for (; i < a.length; i++) {
+            s0 += a[i];
+        }
+        return s0 + s1 + s2 + s3;
+    }
+
+    @Benchmark
+    public int psiSelection() {
+        return tables.bestCandidate(posterior);
+    }
+}
