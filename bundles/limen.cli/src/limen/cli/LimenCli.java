@@ -20,7 +20,6 @@ import picocli.CommandLine.IVersionProvider;
         footer = {"", "Caution: " + About.RESEARCH_CAUTION},
         subcommands = {
                 CommandLine.HelpCommand.class,
-                CheckCommand.class,
                 FitCommand.class,
         })
 public final class LimenCli implements Runnable {
