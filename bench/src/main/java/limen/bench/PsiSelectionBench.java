@@ -25,7 +25,8 @@ import limen.psychometric.Sigmoids;
 /**
  * One Psi-method trial selection (Kontsevich &amp; Tyler 1999) on 100 thresholds × 40 spreads × 5 lapse rates
  * = 20,000 parameter points and 61 candidate values: one pass over the precomputed (ψ, h(ψ)) table,
- * 61 × 20,000 × 2 floats = 9.8 MB. The baseline streams a float array of the same size (a sum with four
+ * 61 × 20,000 × 2 floats = 9.8 MB (at the prior every point counts; later, points of negligible
+ * posterior weight are skipped). The baseline streams a float array of the same size (a sum with four
  * accumulators): the memory-bandwidth floor of any single pass over that table. Sample mode, so JMH prints
  * the median (p0.50) beside the mean; one thread.
  */
@@ -40,6 +41,7 @@ public class PsiSelectionBench {
 
     private PsiTables tables;
     private double[] posterior;
+    private double[] prior;
     private float[] sameBytes;
 
     @Setup
@@ -56,6 +58,7 @@ public class PsiSelectionBench {
                 .build();
         // a posterior shaped by 30 simulated trials, as in a running session
         PsiMethod psi = settings.create(new SplittableRandom(1));
+        prior = psi.posterior();
         PsychometricFunction listener = new PsychometricFunction(Sigmoids.LOGISTIC, 0.7, 0.8, 0.5, 0.02);
         SplittableRandom rng = new SplittableRandom(2);
         for (int t = 0; t < 30; t++) {
@@ -95,8 +98,15 @@ public class PsiSelectionBench {
         return s0 + s1 + s2 + s3;
     }
 
+    /** The first trial: the Gaussian prior on α leaves every point above the negligible weight (the worst case). */
     @Benchmark
-    public int psiSelection() {
+    public int psiSelectionAtPrior() {
+        return tables.bestCandidate(prior);
+    }
+
+    /** After 30 trials: points of negligible posterior weight are skipped. */
+    @Benchmark
+    public int psiSelectionAfter30Trials() {
         return tables.bestCandidate(posterior);
     }
 }

@@ -3,10 +3,13 @@ package limen.procedure.internal;
 import limen.psychometric.Sigmoid;
 
 /**
- * Precomputed ψ and binary-entropy tables of the Psi method: for candidate c and parameter point
- * θ = (α, β, λ), {@code table[c·2P + 2θ] = ψ(x_c; θ)} and {@code table[c·2P + 2θ + 1] = h(ψ)} with
- * h(p) = −p ln p − (1 − p) ln(1 − p), in single precision so one selection streams 8 bytes per
- * (candidate, point). Sums are accumulated in double precision with independent accumulators.
+ * Precomputed ψ and binary-entropy tables of the Psi method, point-major: for parameter point
+ * θ = (α, β, λ) and candidate c, {@code table[θ·2C + c] = ψ(x_c; θ)} and
+ * {@code table[θ·2C + C + c] = h(ψ)} with h(p) = −p ln p − (1 − p) ln(1 − p), in single precision so
+ * one selection streams at most 8 bytes per (candidate, point). One pass over the points adds
+ * w(θ)·ψ and w(θ)·h into 2C double-precision accumulators (independent per candidate, so the inner
+ * loops vectorise); points whose posterior weight is below 1e-14 are skipped, which changes every sum
+ * by less than 1e-14 per point while the posterior concentrates.
  */
 public final class PsiTables {
 
@@ -32,10 +35,9 @@ public final class PsiTables {
         double[] psi = new double[points];
         for (int c = 0; c < candidates; c++) {
             fillPsi(candidateValues[c], psi);
-            int base = c * 2 * points;
             for (int k = 0; k < points; k++) {
-                table[base + 2 * k] = (float) psi[k];
-                table[base + 2 * k + 1] = (float) binaryEntropy(psi[k]);
+                table[k * 2 * candidates + c] = (float) psi[k];
+                table[k * 2 * candidates + candidates + c] = (float) binaryEntropy(psi[k]);
             }
         }
     }
@@ -80,52 +82,48 @@ public final class PsiTables {
         return candidates;
     }
 
+    /** Posterior weights below this are skipped in the selection pass. */
+    static final double NEGLIGIBLE_WEIGHT = 1e-14;
+
     /**
      * @param w the posterior (normalised), length {@link #points()}
      * @return for each candidate the mutual information h(Σ w p_c) − Σ w h(p_c) in nats
      */
     public double[] informationGains(double[] w) {
-        double[] g = new double[candidates];
-        for (int c = 0; c < candidates; c++) {
-            g[c] = gain(w, c);
+        final int nc = candidates;
+        final float[] t = table;
+        double[] pSum = new double[nc];
+        double[] hSum = new double[nc];
+        for (int k = 0, base = 0; k < points; k++, base += 2 * nc) {
+            double wk = w[k];
+            if (wk < NEGLIGIBLE_WEIGHT) {
+                continue;
+            }
+            for (int c = 0; c < nc; c++) {
+                pSum[c] += wk * t[base + c];
+            }
+            int hb = base + nc;
+            for (int c = 0; c < nc; c++) {
+                hSum[c] += wk * t[hb + c];
+            }
+        }
+        double[] g = new double[nc];
+        for (int c = 0; c < nc; c++) {
+            g[c] = binaryEntropy(Math.min(Math.max(pSum[c], 0), 1)) - hSum[c];
         }
         return g;
     }
 
     /** @return the candidate index of the largest information gain (least expected entropy), the first on ties */
     public int bestCandidate(double[] w) {
+        double[] g = informationGains(w);
         int best = 0;
-        double bestGain = Double.NEGATIVE_INFINITY;
-        for (int c = 0; c < candidates; c++) {
-            double g = gain(w, c);
-            if (g > bestGain) {
-                bestGain = g;
+        for (int c = 1; c < g.length; c++) {
+            if (g[c] > g[best]) {
                 best = c;
             }
         }
         return best;
-    }
-
-    private double gain(double[] w, int c) {
-        final float[] t = table;
-        int i = c * 2 * points;
-        double p0 = 0, p1 = 0, h0 = 0, h1 = 0;
-        int k = 0;
-        // Two points per iteration, four independent accumulators: the loop is bound by memory, not latency.
-        for (; k + 1 < points; k += 2, i += 4) {
-            double w0 = w[k];
-            double w1 = w[k + 1];
-            p0 += w0 * t[i];
-            h0 += w0 * t[i + 1];
-            p1 += w1 * t[i + 2];
-            h1 += w1 * t[i + 3];
-        }
-        if (k < points) {
-            p0 += w[k] * t[i];
-            h0 += w[k] * t[i + 1];
-        }
-        double pBar = Math.min(Math.max(p0 + p1, 0), 1);
-        return binaryEntropy(pBar) - (h0 + h1);
     }
 
     /** Multiplies w by the likelihood of one response at value x (in double precision) and renormalises. */
