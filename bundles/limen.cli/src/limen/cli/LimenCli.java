@@ -20,6 +20,7 @@ import picocli.CommandLine.IVersionProvider;
         footer = {"", "Caution: " + About.RESEARCH_CAUTION},
         subcommands = {
                 CommandLine.HelpCommand.class,
+                CheckCommand.class,
                 FitCommand.class,
         })
 public final class LimenCli implements Runnable {

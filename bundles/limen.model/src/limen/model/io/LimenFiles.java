@@ -3,6 +3,7 @@ package limen.model.io;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -113,6 +114,7 @@ public final class LimenFiles {
         } catch (StackOverflowError e) {
             failure = new IOException("elements are nested too deeply to read", null);
         }
+        resource.moveToTagStarts(new String(bytes, StandardCharsets.UTF_8));
         problems.addAll(LoadProblems.of(file, resource, failure));
         LimenDocument document = null;
         if (problems.stream().noneMatch(Problem::isError)) {

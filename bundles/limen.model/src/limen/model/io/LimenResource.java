@@ -54,6 +54,51 @@ public class LimenResource extends XMIResourceImpl {
         return new int[] {0, 0};
     }
 
+    /**
+     * SAX reports where a start tag ends; moves every recorded position to the '&lt;' that opens the tag, so
+     * that tags spread over several lines are reported at their first line.
+     *
+     * @param text the document text the positions refer to
+     */
+    void moveToTagStarts(String text) {
+        int[] lineStarts = lineStarts(text);
+        for (int[] p : startPositions.values()) {
+            if (p[0] < 1 || p[0] > lineStarts.length) {
+                continue;
+            }
+            int offset = Math.min(text.length(), lineStarts[p[0] - 1] + Math.max(0, p[1] - 1));
+            int open = text.lastIndexOf('<', Math.max(0, offset - 1));
+            if (open < 0) {
+                continue;
+            }
+            int line = lineOf(lineStarts, open);
+            p[0] = line + 1;
+            p[1] = open - lineStarts[line] + 1;
+        }
+    }
+
+    private static int[] lineStarts(String text) {
+        int count = 1;
+        for (int i = 0; i < text.length(); i++) {
+            if (text.charAt(i) == '\n') {
+                count++;
+            }
+        }
+        int[] starts = new int[count];
+        int line = 1;
+        for (int i = 0; i < text.length(); i++) {
+            if (text.charAt(i) == '\n') {
+                starts[line++] = i + 1;
+            }
+        }
+        return starts;
+    }
+
+    private static int lineOf(int[] lineStarts, int offset) {
+        int i = java.util.Arrays.binarySearch(lineStarts, offset);
+        return i >= 0 ? i : -i - 2;
+    }
+
     @Override
     protected void doUnload() {
         startPositions.clear();
