@@ -11,7 +11,7 @@ import limen.signal.Calibration;
  * of a buffer produces through a calibration, whatever the buffer holds (no declaration needed).
  * <p>
  * Method (short-time spectrum). Frames of {@code B} samples ({@value #FRAME_SECONDS_NOMINAL} s nominal: 4096
- * samples at 44.1 and 48 kHz, 8192 at 96 kHz), hop {@code B/8}, the first frame starting at sample 0 and the
+ * samples at 44.1 and 48 kHz, 8192 at 96 kHz), hop {@code B/4}, the first frame starting at sample 0 and the
  * last reaching past the end (zero-padded). Each frame is weighted by the Hann window
  * {@code w[n] = sin²(π(n+1/2)/B)} and transformed (Commons Math radix-2 FFT, {@code X_k}). By Parseval,
  * {@code Σ_k |X_k|² = B·Σ_n (w[n]x[n])²}, so each bin's share of the frame's windowed energy is known exactly;
@@ -59,7 +59,7 @@ public final class LevelBound {
         this.calibration = calibration;
         double fs = calibration.sampleRateHz();
         this.frame = fs > 48000 ? 8192 : 4096;
-        this.hop = frame / 8;
+        this.hop = frame / 4;
         this.window = new double[frame];
         double e = 0;
         for (int n = 0; n < frame; n++) {
