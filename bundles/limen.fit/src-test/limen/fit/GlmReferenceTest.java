@@ -48,6 +48,7 @@ class GlmReferenceTest {
             assertEquals(ReferenceTables.number(row, "loglik"), fit.logLikelihood(), DEVIANCE_TOLERANCE, label + " loglik");
             assertEquals(0.0, fit.function().guess());
             assertEquals(0.0, fit.function().lapse());
+            assertEquals(derivativeFreeOnly, fit.derivativeFree(), label + ": which optimiser won");
             assertTrue(fit.warnings().isEmpty(), label + " " + fit.warnings());
         }
     }

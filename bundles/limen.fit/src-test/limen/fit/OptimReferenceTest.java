@@ -23,21 +23,32 @@ class OptimReferenceTest {
 
     @Test
     void fitsEqualROptimOnTheSameLikelihood() {
+        check(false);
+    }
+
+    /** The derivative-free fallback (BOBYQA alone) reaches the same optimum, bounds included. */
+    @Test
+    void derivativeFreeFallbackAlsoEqualsROptim() {
+        check(true);
+    }
+
+    private static void check(boolean derivativeFreeOnly) {
         List<Map<String, String>> rows = ReferenceTables.read("optim_reference.csv");
         assertEquals(5, rows.size());
         for (Map<String, String> row : rows) {
-            String label = row.get("dataset") + "/" + row.get("family") + "/" + row.get("mode");
+            String label = row.get("dataset") + "/" + row.get("family") + "/" + row.get("mode") + (derivativeFreeOnly ? " (BOBYQA only)" : "");
             FitOptions options = FitOptions.of(Sigmoids.byName(row.get("family")));
             double g = ReferenceTables.number(row, "guess_setting");
             double l = ReferenceTables.number(row, "lapse_setting");
             options = row.get("mode").equals("fixed") ? options.withGuess(g).withLapse(l) : options.withFreeGuess(g).withLapseMax(l);
-            FitResult fit = new PsychometricFitter(options).fit(ReferenceTables.dataset(row.get("dataset")));
+            FitResult fit = new PsychometricFitter(options).fit(ReferenceTables.dataset(row.get("dataset")), null, derivativeFreeOnly);
             double location = ReferenceTables.number(row, "location");
             double spread = ReferenceTables.number(row, "spread");
             assertEquals(location, fit.function().location(), PARAMETER_RELATIVE_TOLERANCE * Math.abs(location), label + " location");
             assertEquals(spread, fit.function().spread(), PARAMETER_RELATIVE_TOLERANCE * spread, label + " spread");
             assertEquals(ReferenceTables.number(row, "guess"), fit.function().guess(), 1e-5, label + " guess");
             assertEquals(ReferenceTables.number(row, "lapse"), fit.function().lapse(), 1e-6, label + " lapse");
+            assertEquals(derivativeFreeOnly, fit.derivativeFree(), label + ": which optimiser won");
             // our optimum must be at least as good as optim's and no better than rounding allows
             assertEquals(ReferenceTables.number(row, "loglik"), fit.logLikelihood(), LOGLIK_TOLERANCE, label + " loglik");
         }

@@ -90,7 +90,15 @@ public final class BinomialData {
 
     /** @return the number of distinct stimulus values */
     public int distinctValues() {
-        return (int) Arrays.stream(values).distinct().count();
+        double[] sorted = values.clone();
+        Arrays.sort(sorted);
+        int distinct = 1;
+        for (int i = 1; i < sorted.length; i++) {
+            if (sorted[i] != sorted[i - 1]) {
+                distinct++;
+            }
+        }
+        return distinct;
     }
 
     /** @return data with the same values and trials and these correct counts (used by the bootstrap) */

@@ -22,8 +22,10 @@ public final class FitResult {
     private final double deviance;
     private final List<String> warnings;
     private final long evaluations;
+    private final boolean derivativeFree;
 
-    FitResult(BinomialData data, FitOptions options, PsychometricFunction function, List<String> warnings, long evaluations) {
+    FitResult(BinomialData data, FitOptions options, PsychometricFunction function, List<String> warnings, long evaluations,
+            boolean derivativeFree) {
         this.data = data;
         this.options = options;
         this.function = function;
@@ -35,6 +37,12 @@ public final class FitResult {
         this.deviance = BinomialLikelihood.deviance(data, function);
         this.warnings = List.copyOf(warnings);
         this.evaluations = evaluations;
+        this.derivativeFree = derivativeFree;
+    }
+
+    /** @return true when the winning optimum came from the derivative-free fallback (BOBYQA), for tests */
+    boolean derivativeFree() {
+        return derivativeFree;
     }
 
     /**

@@ -2,7 +2,6 @@ package limen.fit;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
 
@@ -10,7 +9,6 @@ import org.apache.commons.math3.analysis.MultivariateFunction;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.optim.InitialGuess;
 import org.apache.commons.math3.optim.MaxEval;
-import org.apache.commons.math3.optim.PointValuePair;
 import org.apache.commons.math3.optim.SimpleBounds;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
@@ -40,8 +38,8 @@ import limen.psychometric.PsychometricFunction;
  */
 public final class PsychometricFitter {
 
-    static final int GRID_LOCATIONS = 9;
-    static final int GRID_SCALES = 5;
+    static final int GRID_LOCATIONS = 7;
+    static final int GRID_SCALES = 4;
     static final double DISTINCT_START = 0.3;
     private static final double INITIAL_RADIUS = 0.2;
     private static final double STOPPING_RADIUS = 1e-9;
@@ -81,32 +79,31 @@ public final class PsychometricFitter {
     /** @param derivativeFreeOnly skip Fisher scoring (tests compare the two optimisers) */
     FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly) {
         Objective objective = new Objective(data, options);
-        List<PointValuePair> starts = starts(objective, data, extraStart);
+        double[][] starts = starts(objective, data, extraStart);
         double[] best = null;
         double bestValue = Double.POSITIVE_INFINITY;
-        List<double[]> used = new ArrayList<>();
-        for (PointValuePair start : starts) {
-            if (used.size() == 2) {
-                break;
-            }
-            if (used.stream().anyMatch(u -> distance(u, start.getPointRef()) < DISTINCT_START)) {
-                continue;
-            }
-            used.add(start.getPointRef());
-            double[] p = derivativeFreeOnly ? null : FisherScoring.maximise(objective, start.getPoint());
-            if (p == null) {
-                p = boundedSearch(objective, start.getPoint());
+        boolean bestDerivativeFree = false;
+        for (double[] start : starts) {
+            double[] p = derivativeFreeOnly ? null : FisherScoring.maximise(objective, start, best);
+            boolean fallback = p == null;
+            if (fallback) {
+                p = boundedSearch(objective, start);
             }
             double v = objective.value(p);
             if (v < bestValue) {
                 best = p;
                 bestValue = v;
+                bestDerivativeFree = fallback;
             }
         }
         PsychometricFunction f = objective.function(best);
-        return new FitResult(data, options, f, warnings(objective, best, f, data), objective.evaluations());
+        return new FitResult(data, options, f, warnings(objective, best, f, data), objective.evaluations(), bestDerivativeFree);
     }
-    private List<PointValuePair> starts(Objective objective, BinomialData data, PsychometricFunction extraStart) {
+    /**
+     * @return the best grid point (or the extra start, if better) and the best one at least
+     *         {@value #DISTINCT_START} working units from it (absent when every point is closer)
+     */
+    private double[][] starts(Objective objective, BinomialData data, PsychometricFunction extraStart) {
         double minP = 1;
         double maxP = 0;
         for (int i = 0; i < data.size(); i++) {
@@ -115,21 +112,36 @@ public final class PsychometricFitter {
         }
         double guess0 = clamp(minP, 0.1 * options.guessMax(), 0.9 * options.guessMax());
         double lapse0 = clamp(1 - maxP, 0.1 * options.lapseMax(), 0.9 * options.lapseMax());
-        List<PointValuePair> candidates = new ArrayList<>();
+        int count = GRID_LOCATIONS * GRID_SCALES + (extraStart == null ? 0 : 1);
+        double[][] points = new double[count][];
+        double[] values = new double[count];
+        int p = 0;
         for (int i = 0; i < GRID_LOCATIONS; i++) {
             double c0 = -0.6 + 1.2 * i / (GRID_LOCATIONS - 1);
             for (int j = 0; j < GRID_SCALES; j++) {
                 double c1 = Math.log(0.02) + (Math.log(1.0) - Math.log(0.02)) * j / (GRID_SCALES - 1);
-                double[] c = objective.coordinates(c0, c1, guess0, lapse0);
-                candidates.add(new PointValuePair(c, objective.value(c), false));
+                points[p] = objective.coordinates(c0, c1, guess0, lapse0);
+                values[p] = objective.value(points[p]);
+                p++;
             }
         }
         if (extraStart != null) {
-            double[] c = objective.coordinates(extraStart);
-            candidates.add(new PointValuePair(c, objective.value(c), false));
+            points[p] = objective.coordinates(extraStart);
+            values[p] = objective.value(points[p]);
         }
-        candidates.sort(Comparator.comparingDouble(PointValuePair::getValue));
-        return candidates;
+        int first = 0;
+        for (int i = 1; i < count; i++) {
+            if (values[i] < values[first]) {
+                first = i;
+            }
+        }
+        int second = -1;
+        for (int i = 0; i < count; i++) {
+            if (distance(points[i], points[first]) >= DISTINCT_START && (second < 0 || values[i] < values[second])) {
+                second = i;
+            }
+        }
+        return second < 0 ? new double[][] { points[first] } : new double[][] { points[first], points[second] };
     }
 
     /**

@@ -23,6 +23,7 @@ public final class FisherScoring {
     static final int MAX_ITERATIONS = 100;
     private static final double STEP_TOLERANCE = 1e-10;
     private static final int MAX_HALVINGS = 40;
+    static final double SAME_BASIN = 1e-3;
 
     private FisherScoring() {
     }
@@ -31,6 +32,15 @@ public final class FisherScoring {
      * @return the maximiser in working coordinates, or null when scoring failed
      */
     public static double[] maximise(Objective objective, double[] start) {
+        return maximise(objective, start, null);
+    }
+
+    /**
+     * @param known an optimum found from another start, or null: once the iterate comes within
+     *              {@value #SAME_BASIN} of it the climb stops early and returns the iterate (it would end there)
+     * @return the maximiser in working coordinates, or null when scoring failed
+     */
+    public static double[] maximise(Objective objective, double[] start, double[] known) {
         int dim = objective.dimension();
         double[] lo = objective.lowerBounds();
         double[] hi = objective.upperBounds();
@@ -80,6 +90,9 @@ public final class FisherScoring {
                     if (size < STEP_TOLERANCE || (moved < STEP_TOLERANCE && stalled)) {
                         return c;
                     }
+                    if (known != null && distance(c, known) < SAME_BASIN) {
+                        return c;
+                    }
                 }
             }
             if (!improved) {
@@ -88,6 +101,14 @@ public final class FisherScoring {
             }
         }
         return null;
+    }
+
+    private static double distance(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) {
+            s = Math.max(s, Math.abs(a[i] - b[i]));
+        }
+        return s;
     }
 
     private static double[] solve(double[][] info, double[] score, boolean[] held, int free) {

@@ -18,8 +18,8 @@ import limen.psychometric.Sigmoids;
  *   c1 = ln(scale_u / R)                 scale_u = spread, or 1/beta for the Weibull
  *   c2 = γ / γmax  (only if γ is free)   c3 = λ / λmax  (only if λ is free)
  * </pre>
- * For the Weibull this uses weibull(x; A, B) = gumbel(ln x; ln A, 1/B): its working coordinates are those
- * of a location-scale family on ln x. Not thread-safe only in the sense that {@link #evaluations()} counts
+ * For the Weibull this uses weibull(x; A, B) = gumbel(ln x; ln A, 1/B): the likelihood is evaluated as the
+ * Gumbel on u = ln x (one exponential per cell instead of a power), and A = e^m, B = 1/s only at the end. Not thread-safe only in the sense that {@link #evaluations()} counts
  * calls; instances are used by one fit at a time.
  */
 public final class Objective implements MultivariateFunction {
@@ -32,7 +32,11 @@ public final class Objective implements MultivariateFunction {
 
     private final Sigmoid sigmoid;
     private final boolean logDomain;
+    /** The family evaluated on the working axis: the Gumbel on ln x for the Weibull, else the family itself. */
+    private final Sigmoid working;
     private final double[] x;
+    /** Working stimulus u_i: ln x_i for the Weibull, x_i otherwise. */
+    private final double[] u;
     private final int[] n;
     private final int[] k;
     private final double centre;
@@ -52,7 +56,9 @@ public final class Objective implements MultivariateFunction {
         if (logDomain && sigmoid != Sigmoids.WEIBULL) {
             throw new IllegalArgumentException("fitting supports location-scale families and the Weibull, not " + sigmoid.name());
         }
+        this.working = logDomain ? Sigmoids.GUMBEL : sigmoid;
         this.x = data.values();
+        this.u = new double[x.length];
         this.n = data.trials();
         this.k = data.correct();
         double lo = Double.POSITIVE_INFINITY;
@@ -61,9 +67,9 @@ public final class Objective implements MultivariateFunction {
             if (logDomain && !(x[i] > 0)) {
                 throw new IllegalArgumentException("the Weibull needs stimulus values > 0; cell " + (i + 1) + " has " + x[i]);
             }
-            double u = logDomain ? Math.log(x[i]) : x[i];
-            lo = Math.min(lo, u);
-            hi = Math.max(hi, u);
+            u[i] = logDomain ? Math.log(x[i]) : x[i];
+            lo = Math.min(lo, u[i]);
+            hi = Math.max(hi, u[i]);
         }
         if (!(hi > lo)) {
             throw new IllegalArgumentException("fewer than 2 distinct stimulus values (all at " + x[0] + ")");
@@ -104,21 +110,21 @@ public final class Objective implements MultivariateFunction {
     @Override
     public double value(double[] c) {
         evaluations++;
-        double loc = location(c);
-        double spread = spread(c);
+        double m = workingLocation(c);
+        double s = workingScale(c);
         double g = guess(c);
         double l = lapse(c);
         double r = 1 - g - l;
         double sum = 0;
-        for (int i = 0; i < x.length; i++) {
-            double f = sigmoid.value(x[i], loc, spread);
+        for (int i = 0; i < u.length; i++) {
+            double f = working.value(u[i], m, s);
             int ki = k[i];
             int misses = n[i] - ki;
             if (ki > 0) {
                 sum += ki * Math.log(Math.max(g + r * f, Double.MIN_NORMAL));
             }
             if (misses > 0) {
-                double fc = f < 0.5 ? 1 - f : sigmoid.complementValue(x[i], loc, spread);
+                double fc = f < 0.5 ? 1 - f : working.complementValue(u[i], m, s);
                 sum += misses * Math.log(Math.max(l + r * fc, Double.MIN_NORMAL));
             }
         }
@@ -139,26 +145,24 @@ public final class Objective implements MultivariateFunction {
      * @param information filled with I (dimension × dimension)
      */
     public void scoreAndInformation(double[] c, double[] score, double[][] information) {
-        double loc = location(c);
-        double spread = spread(c);
+        double mU = workingLocation(c);
+        double s = workingScale(c);
         double g = guess(c);
         double l = lapse(c);
         double r = 1 - g - l;
-        double mU = centre + c[0] * range;
         java.util.Arrays.fill(score, 0);
         for (double[] row : information) {
             java.util.Arrays.fill(row, 0);
         }
         double[] d = new double[dimension];
-        for (int i = 0; i < x.length; i++) {
-            double f = sigmoid.value(x[i], loc, spread);
-            double fc = f < 0.5 ? 1 - f : sigmoid.complementValue(x[i], loc, spread);
+        for (int i = 0; i < u.length; i++) {
+            double f = working.value(u[i], mU, s);
+            double fc = f < 0.5 ? 1 - f : working.complementValue(u[i], mU, s);
             double psi = g + r * f;
             double q = l + r * fc;
-            double dFdu = sigmoid.derivative(x[i], loc, spread) * (logDomain ? x[i] : 1);
-            double u = logDomain ? Math.log(x[i]) : x[i];
+            double dFdu = working.derivative(u[i], mU, s);
             d[0] = -r * range * dFdu;
-            d[1] = -r * (u - mU) * dFdu;
+            d[1] = -r * (u[i] - mU) * dFdu;
             int j = 2;
             if (options.guessFree()) {
                 d[j++] = options.guessMax() * fc;
@@ -166,7 +170,7 @@ public final class Objective implements MultivariateFunction {
             if (options.lapseFree()) {
                 d[j] = -options.lapseMax() * f;
             }
-            double w = 1 / Math.max(psi * q, Double.MIN_NORMAL);
+        double w = 1 / Math.max(psi * q, Double.MIN_NORMAL);
             double residual = (k[i] - n[i] * psi) * w;
             for (int a = 0; a < dimension; a++) {
                 score[a] += residual * d[a];
@@ -220,13 +224,21 @@ public final class Objective implements MultivariateFunction {
         return c;
     }
 
+    private double workingLocation(double[] c) {
+        return centre + c[0] * range;
+    }
+
+    private double workingScale(double[] c) {
+        return range * Math.exp(c[1]);
+    }
+
     private double location(double[] c) {
-        double u = centre + c[0] * range;
-        return logDomain ? Math.exp(u) : u;
+        double m = workingLocation(c);
+        return logDomain ? Math.exp(m) : m;
     }
 
     private double spread(double[] c) {
-        double s = range * Math.exp(c[1]);
+        double s = workingScale(c);
         return logDomain ? 1 / s : s;
     }
 
