@@ -230,10 +230,13 @@ public final class LoopbackSelfTest {
     /**
      * Runs the test on the given devices: opens the output, starts recording, waits
      * {@value #SETTLE_NANOS} ns, plays the tone, records {@value #TAIL_NANOS} ns more, stops and
-     * {@link #analyse analyses}. The latency estimate is {@code T(onset_captured) - (t_write + onset_rendered/fs)},
-     * with {@code T} the latest time the captured onset can have been recorded
-     * ({@link Recorder#frameTimeBoundNanos}): the delay from {@code write()} until the tone's onset is available
-     * from the capture, an upper bound on the output delay that includes the capture path's delivery delay.
+     * {@link #analyse analyses}. The latency is {@code t_arrival - (t_write + onset_rendered/fs)}: from the
+     * moment the tone's onset was due after {@code write()} (its position in the buffer) to the return of the
+     * capture read that delivered it ({@link Recorder#frameArrivalNanos}). It includes the capture path's
+     * delivery delay (with the capture buffer of {@value #CAPTURE_BUFFER_MILLIS} ms, chosen so that a busy machine
+     * does not overrun the recording, PulseAudio delivers in fragments of tens of ms) and up to one read (about
+     * 5 ms), so it is an upper bound on the output delay; a sound server that processes in blocks may deliver a
+     * block before the time of its last sample, so small negative values can occur.
      *
      * @param outputName output device name, or {@code null} for the default
      * @param captureName capture device name, or {@code null} for the default
@@ -275,7 +278,7 @@ public final class LoopbackSelfTest {
             Result r = analyse(tone, captured, out.describe(), capture.name(), Double.NaN);
             double latency = Double.NaN;
             if (!r.channels().isEmpty() && r.channels().get(0).captured() != null) {
-                long captured0 = recorder.frameTimeBoundNanos(r.channels().get(0).captured().onsetSample());
+                long captured0 = recorder.frameArrivalNanos(r.channels().get(0).captured().onsetSample());
                 if (captured0 != Long.MAX_VALUE) {
                     double renderedOnset = out.lastWriteNanos() + r.rendered().onsetSample() * 1e9 / settings.sampleRateHz();
                     latency = (captured0 - renderedOnset) / 1e6;

@@ -66,23 +66,20 @@ public final class Recorder {
     }
 
     /**
-     * The latest time at which recorded frame {@code frame} can have been captured, on the
-     * {@link System#nanoTime()} clock: every read that returned at time {@code t_j} with {@code E_j} frames
-     * recorded so far shows frame {@code k <= E_j} existed by {@code t_j - (E_j - k)/fs} (the capture clock
-     * runs at the nominal rate), and the smallest such bound is the tightest. It exceeds the true capture time by
-     * the capture path's delivery delay. {@code Long.MAX_VALUE} if no read covered the frame.
+     * When recorded frame {@code frame} was first available to this program: the {@link System#nanoTime()} at
+     * which the first read that delivered it returned ({@code Long.MAX_VALUE} if none did). Later than the
+     * moment the frame was captured by the capture path's delivery delay and at most one read's length (about
+     * 5 ms).
      */
-    public long frameTimeBoundNanos(long frame) {
-        double fs = line.getFormat().getFrameRate();
-        long best = Long.MAX_VALUE;
+    public long frameArrivalNanos(long frame) {
         synchronized (data) {
             for (int j = 0; j < reads; j++) {
                 if (readFrames[j] > frame) {
-                    best = Math.min(best, readNanos[j] - Math.round((readFrames[j] - frame) / fs * 1e9));
+                    return readNanos[j];
                 }
             }
         }
-        return best;
+        return Long.MAX_VALUE;
     }
 
     private void note(long nanos, long frames) {
@@ -97,8 +94,8 @@ public final class Recorder {
 
     private void loop() {
         int frame = line.getFormat().getFrameSize();
-        // read in pieces of about 20 ms so that stop() is honoured promptly
-        int chunk = Math.max(frame, (int) (line.getFormat().getFrameRate() / 50) * frame);
+        // read in pieces of about 5 ms: fine arrival times, and stop() is honoured promptly
+        int chunk = Math.max(frame, (int) (line.getFormat().getFrameRate() / 200) * frame);
         byte[] buf = new byte[chunk];
         try {
             while (running) {
