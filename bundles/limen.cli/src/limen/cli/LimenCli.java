@@ -23,6 +23,7 @@ import picocli.CommandLine.IVersionProvider;
                 CheckCommand.class,
                 FitCommand.class,
                 SelftestCommand.class,
+                RunCommand.class,
         })
 public final class LimenCli implements Runnable {
 
