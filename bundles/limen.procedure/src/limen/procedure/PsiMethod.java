@@ -26,8 +26,7 @@ public final class PsiMethod extends AbstractProcedure {
     PsiMethod(PsiSettings settings) {
         super(settings.stopRule());
         this.settings = settings;
-        this.tables = PsiTables.of(settings.sigmoid(), settings.guess(), settings.thresholdsShared(),
-                settings.spreadsShared(), settings.lapsesShared(), settings.candidatesShared());
+        this.tables = settings.tables();
         double[] th = settings.thresholdsShared();
         int perThreshold = settings.spreadsShared().length * settings.lapsesShared().length;
         this.posterior = new double[settings.points()];

@@ -3,6 +3,7 @@ package limen.procedure;
 import java.util.Objects;
 import java.util.random.RandomGenerator;
 
+import limen.procedure.internal.PsiTables;
 import limen.psychometric.PsychometricFunction;
 import limen.psychometric.Sigmoid;
 import limen.psychometric.Sigmoids;
@@ -31,6 +32,8 @@ public final class PsiSettings implements ProcedureFactory {
     private final double priorMean;
     private final double priorSd;
     private final StopRule stopRule;
+    /** Read-only once built, so every procedure (and simulation thread) of these settings shares it. */
+    private volatile PsiTables tables;
 
     private PsiSettings(Builder b) {
         this.sigmoid = Objects.requireNonNull(b.sigmoid, "sigmoid");
@@ -85,6 +88,21 @@ public final class PsiSettings implements ProcedureFactory {
 
     public Sigmoid sigmoid() {
         return sigmoid;
+    }
+
+    /** @return the precomputed selection tables, built on first use */
+    PsiTables tables() {
+        PsiTables t = tables;
+        if (t == null) {
+            synchronized (this) {
+                t = tables;
+                if (t == null) {
+                    t = PsiTables.of(sigmoid, guess, thresholds, spreads, lapses, candidates);
+                    tables = t;
+                }
+            }
+        }
+        return t;
     }
 
     public double guess() {

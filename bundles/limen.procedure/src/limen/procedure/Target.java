@@ -50,6 +50,6 @@ public record Target(Level level, double proportion) {
 
     @Override
     public String toString() {
-        return (level == Level.PSI ? "psi=" : "F=") + proportion;
+        return (level == Level.PSI ? "psi=" : "F=") + String.format(java.util.Locale.ROOT, "%.4f", proportion);
     }
 }
