@@ -327,7 +327,7 @@ public interface SessionHeader extends LimenDocument {
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
-	 * The snapshot's steps in the order they were run (or are to be run).
+	 * The snapshot's steps in the order they were run (or are to be run); each step at most once.
 	 * <!-- end-model-doc -->
 	 * @return the value of the '<em>Step Order</em>' reference list.
 	 * @see limen.model.LimenPackage#getSessionHeader_StepOrder()
@@ -365,7 +365,7 @@ public interface SessionHeader extends LimenDocument {
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
-	 * A non-blank pseudonym, an end not before the start, an end time for finished sessions, a run order that uses each snapshot step at most once, and exposure figures that are not negative and stay at or under the ceiling (LM0701-LM0705).
+	 * A non-blank pseudonym, an end not before the start, an end time for finished sessions, a run order of snapshot steps only, and exposure figures that are not negative and stay at or under the ceiling (LM0701-LM0705).
 	 * @param diagnostics Receives one diagnostic per problem found (may be null to ask only whether the invariant holds).
 	 * @param context The validation context; may hold the calibration to check levels and frequencies against, see limen.model.validation.BatteryValidator.
 	 * <!-- end-model-doc -->

@@ -17,6 +17,7 @@ import limen.model.io.LimenFiles;
 import limen.model.io.LoadResult;
 import limen.model.validation.BatteryValidator;
 import limen.model.validation.Problem;
+import limen.model.testsupport.TestPaths;
 import limen.model.validation.ProblemCode;
 
 /** The demo lab in examples/ loads and validates without errors against its demo calibration. */

@@ -16,6 +16,7 @@ import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.resource.Resource;
 import org.eclipse.emf.ecore.resource.ResourceSet;
 import org.eclipse.emf.ecore.resource.impl.ResourceSetImpl;
+import org.eclipse.emf.ecore.util.EcoreUtil;
 
 import limen.model.Battery;
 import limen.model.Calibration;
@@ -26,6 +27,7 @@ import limen.model.io.internal.AtomicFiles;
 import limen.model.io.internal.LoadProblems;
 import limen.model.validation.Problem;
 import limen.model.validation.ProblemCode;
+import limen.model.validation.internal.Labels;
 
 /**
  * Reading and writing Limen files: XMI in UTF-8, {@code *.battery} for batteries, {@code *.calibration} for
@@ -161,7 +163,8 @@ public final class LimenFiles {
      *
      * @param document the battery, calibration or session header
      * @param file the target; its folder must exist
-     * @throws IOException if serialising or writing fails; the previous file content is then unchanged
+     * @throws IOException if serialising or writing fails, or the document refers to an element that belongs to
+     *         no document; the previous file content is then unchanged
      * @throws IllegalArgumentException if the document is contained in another (a session's snapshot)
      */
     public static void save(LimenDocument document, Path file) throws IOException {
@@ -169,6 +172,7 @@ public final class LimenFiles {
             throw new IllegalArgumentException("a " + document.eClass().getName()
                     + " inside another document is saved with that document, not on its own");
         }
+        refuseDanglingReferences(document);
         stamp(document);
         URI uri = URI.createFileURI(file.toAbsolutePath().normalize().toString());
         Resource resource = document.eResource();
@@ -186,6 +190,21 @@ public final class LimenFiles {
         resource.setModified(false);
     }
 
+    /** XMI would write a reference to an element outside every document as an id that no longer resolves. */
+    private static void refuseDanglingReferences(LimenDocument document) throws IOException {
+        List<EObject> elements = new ArrayList<>();
+        elements.add(document);
+        EcoreUtil.<EObject>getAllProperContents(document, false).forEachRemaining(elements::add);
+        for (EObject element : elements) {
+            for (EObject target : element.eCrossReferences()) {
+                if (!target.eIsProxy() && target.eResource() == null && !EcoreUtil.isAncestor(document, target)) {
+                    throw new IOException(Labels.of(element) + " refers to " + Labels.of(target)
+                            + ", which belongs to no document; the saved file would not load again");
+                }
+            }
+        }
+    }
+
     private static void stamp(LimenDocument document) {
         document.setSchemaVersion(SCHEMA_VERSION);
         for (Iterator<EObject> it = document.eAllContents(); it.hasNext();) {
@@ -199,8 +218,10 @@ public final class LimenFiles {
         if (resource.getContents().isEmpty() || !(resource.getContents().get(0) instanceof LimenDocument document)) {
             String found = resource.getContents().isEmpty() ? "nothing"
                     : "a " + resource.getContents().get(0).eClass().getName();
+            int[] at = resource.getContents().isEmpty() ? new int[] {1, 0}
+                    : resource.positionOf(resource.getContents().get(0));
             problems.add(Problem.of(ProblemCode.NOT_A_LIMEN_DOCUMENT, "the file holds " + found
-                    + ", not a Battery, Calibration or SessionHeader", file, 1, 0, null, null));
+                    + ", not a Battery, Calibration or SessionHeader", file, at[0], at[1], null, null));
             return null;
         }
         int[] at = resource.positionOf(document);

@@ -164,8 +164,8 @@ public enum ProblemCode {
     SESSION_END_BEFORE_START(701, Severity.ERROR, "The session ends before it starts."),
     /** A completed or aborted session has no end time. */
     SESSION_END_MISSING(702, Severity.ERROR, "A completed or aborted session has no end time."),
-    /** The run order lists a step twice or one not in the battery snapshot. */
-    SESSION_STEP_ORDER(703, Severity.ERROR, "The run order lists a step twice or one not in the battery snapshot."),
+    /** The run order lists a step that is not in the battery snapshot. */
+    SESSION_STEP_ORDER(703, Severity.ERROR, "The run order lists a step that is not in the battery snapshot."),
     /** Exposure figures are negative, not finite, or above the ceiling. */
     SESSION_EXPOSURE(704, Severity.ERROR, "Exposure figures are negative, not finite, or above the ceiling."),
     /** The participant pseudonym is blank. */

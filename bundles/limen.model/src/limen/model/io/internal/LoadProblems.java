@@ -1,5 +1,7 @@
 package limen.model.io.internal;
 
+import java.io.CharConversionException;
+import java.io.UnsupportedEncodingException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -59,6 +61,8 @@ public final class LoadProblems {
                 add(problems, seen, file, d, true);
             } else if (cause instanceof SAXParseException sax) {
                 problems.add(syntax(file, sax));
+            } else if (cause instanceof CharConversionException || cause instanceof UnsupportedEncodingException) {
+                problems.add(encoding(file, cause, 1, 0));
             } else {
                 problems.add(Problem.of(ProblemCode.LOAD_FAILED, "the file could not be read: " + describe(cause),
                         file, 1, 0, null, null));
@@ -76,6 +80,8 @@ public final class LoadProblems {
         Problem problem;
         if (wrapped instanceof SAXParseException sax) {
             problem = syntax(file, sax);
+        } else if (wrapped instanceof CharConversionException || wrapped instanceof UnsupportedEncodingException) {
+            problem = encoding(file, wrapped, Math.max(0, d.getLine()), Math.max(0, d.getColumn()));
         } else {
             int line = Math.max(0, d.getLine());
             int column = Math.max(0, d.getColumn());
@@ -86,7 +92,8 @@ public final class LoadProblems {
             if (d instanceof IllegalValueException e) {
                 code = ProblemCode.INVALID_VALUE;
                 feature = e.getFeature();
-                message = "value '" + e.getValue() + "' of '" + (feature == null ? "?" : feature.getName())
+                Object value = e.getValue() instanceof EObject o ? Labels.of(o) : e.getValue();
+                message = "value '" + value + "' of '" + (feature == null ? "?" : feature.getName())
                         + "' is not a valid " + (feature == null ? "value" : feature.getEType().getName())
                         + cause(e.getWrappedException());
             } else if (d instanceof UnresolvedReferenceException e) {
@@ -126,6 +133,15 @@ public final class LoadProblems {
         return Problem.of(ProblemCode.MALFORMED_FILE, message, file, line, column, null, null);
     }
 
+    private static Problem encoding(Path file, Throwable cause, int line, int column) {
+        String what = cause instanceof UnsupportedEncodingException
+                ? "the declared encoding '" + cause.getMessage() + "' is unknown"
+                : "the bytes are not valid text in the file's encoding (UTF-8 unless declared otherwise): "
+                        + describe(cause);
+        String message = "malformed file" + (column > 0 ? " at column " + column : "") + ": " + what;
+        return Problem.of(ProblemCode.MALFORMED_FILE, message, file, line, column, null, null);
+    }
+
     /** @return warnings for the elements and attributes that were kept because this version does not know them */
     public static List<Problem> unknownContent(Path file, LimenResource resource) {
         List<Problem> problems = new ArrayList<>();
@@ -136,20 +152,25 @@ public final class LoadProblems {
             for (FeatureMap.Entry e : extension.getAnyAttribute()) {
                 names.add("attribute '" + e.getEStructuralFeature().getName() + "'");
             }
+            int[] at = resource.positionOf(owner);
+            boolean unknownOnOwnerTag = !names.isEmpty();
+            int[] firstElement = null;
             for (FeatureMap.Entry e : extension.getMixed()) {
-                if (e.getValue() instanceof EObject) {
-                    names.add("element '" + e.getEStructuralFeature().getName() + "'");
+                String name = "element '" + e.getEStructuralFeature().getName() + "'";
+                if (e.getValue() instanceof EObject element && !names.contains(name)) {
+                    names.add(name);
+                    int[] own = resource.positionOf(element);
+                    if (firstElement == null && own[0] > 0) {
+                        firstElement = own;
+                    }
                 }
             }
-            for (FeatureMap.Entry e : extension.getAny()) {
-                if (!names.contains("element '" + e.getEStructuralFeature().getName() + "'")) {
-                    names.add("element '" + e.getEStructuralFeature().getName() + "'");
-                }
+            if (!unknownOnOwnerTag && firstElement != null) {
+                at = firstElement; // point at the unknown element rather than at its parent
             }
             if (names.isEmpty()) {
                 continue;
             }
-            int[] at = resource.positionOf(owner);
             problems.add(Problem.of(ProblemCode.UNKNOWN_CONTENT_KEPT, Labels.of(owner) + ": unknown "
                     + String.join(", ", names) + " kept as it is (this version of Limen does not use it)", file,
                     at[0], at[1], owner, null));

@@ -3,9 +3,7 @@ package limen.model.validation.internal;
 import static limen.model.validation.internal.Rules.num;
 import static limen.model.validation.internal.Rules.report;
 
-import java.util.HashSet;
 import java.util.Map;
-import java.util.Set;
 
 import org.eclipse.emf.common.util.DiagnosticChain;
 
@@ -24,7 +22,8 @@ public final class SessionRules {
 
     /**
      * LM0705 blank pseudonym, LM0701 end before start, LM0702 finished without end, LM0706 running with end,
-     * LM0703 run order, LM0704 exposure figures.
+     * LM0703 run order with a step outside the snapshot (the list itself holds each step once), LM0704 exposure
+     * figures.
      */
     public static boolean validSession(SessionHeader h, DiagnosticChain diagnostics, Map<Object, Object> context) {
         boolean ok = true;
@@ -45,18 +44,11 @@ public final class SessionRules {
             ok &= report(diagnostics, ProblemCode.SESSION_RUNNING_WITH_END, h, Literals.SESSION_HEADER__END_TIME,
                     h.getEndTime(), who + ": is RUNNING but has an end time " + h.getEndTime());
         }
-        Set<Step> seen = new HashSet<>();
         for (Step step : h.getStepOrder()) {
-            if (step.eIsProxy()) {
-                continue; // LM0002
-            }
-            if (h.getBattery() == null || step.eContainer() != h.getBattery()) {
+            if (!step.eIsProxy() && (h.getBattery() == null || step.eContainer() != h.getBattery())) {
                 ok &= report(diagnostics, ProblemCode.SESSION_STEP_ORDER, h, Literals.SESSION_HEADER__STEP_ORDER,
                         step.getId(), who + ": the run order lists " + Labels.of(step)
                                 + ", which is not in the battery snapshot");
-            } else if (!seen.add(step)) {
-                ok &= report(diagnostics, ProblemCode.SESSION_STEP_ORDER, h, Literals.SESSION_HEADER__STEP_ORDER,
-                        step.getId(), who + ": the run order lists " + Labels.of(step) + " twice");
             }
         }
         ExposureEstimate e = h.getExposure();

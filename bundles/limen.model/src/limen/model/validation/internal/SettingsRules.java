@@ -42,7 +42,7 @@ public final class SettingsRules {
             }
             if (!parses(setting.getValue(), setting.getType())) {
                 ok &= report(diagnostics, ProblemCode.SETTING_VALUE_TYPE, setting, Literals.SETTING__VALUE,
-                        setting.getValue(), Labels.of(setting) + ": value '" + setting.getValue() + "' is not a "
+                        setting.getValue(), Labels.of(setting) + ": value '" + setting.getValue() + "' is not of type "
                                 + setting.getType());
             }
         }

@@ -1,4 +1,4 @@
-package limen.model;
+package limen.model.testsupport;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
