@@ -7,6 +7,7 @@ import java.util.Objects;
 
 import org.apache.commons.math3.analysis.MultivariateFunction;
 import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.apache.commons.math3.optim.InitialGuess;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.SimpleBounds;
@@ -14,7 +15,7 @@ import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
 import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.BOBYQAOptimizer;
 
-import limen.fit.internal.FisherScoring;
+import limen.fit.internal.NewtonScoring;
 import limen.fit.internal.Objective;
 import limen.psychometric.PsychometricFunction;
 
@@ -28,9 +29,11 @@ import limen.psychometric.PsychometricFunction;
  * range, log of the scale, γ/γmax, λ/λmax; the Weibull on ln x) inside the box location ∈ centre ± 3 ranges,
  * scale ∈ [range/1000, 100 range]. A grid of {@value #GRID_LOCATIONS} × {@value #GRID_SCALES} locations and
  * scales is evaluated; from the best grid point and from the best one at least {@value #DISTINCT_START}
- * working units away, box-constrained Fisher scoring (the fast path, {@code FisherScoring}) climbs to the
- * maximum; where it fails (singular information, e.g. separated data) Powell's derivative-free bounded
- * optimiser BOBYQA (Commons Math {@link BOBYQAOptimizer}; Powell 2009, Cambridge report DAMTP 2009/NA06)
+ * working units away, box-constrained Newton-Raphson with Fisher scoring as safeguard (the fast path,
+ * {@code NewtonScoring}) climbs to the maximum, and the better optimum wins; only where it fails from every
+ * start (singular information, e.g. separated data) Powell's derivative-free bounded optimiser BOBYQA
+ * (Commons Math {@link BOBYQAOptimizer}; Powell 2009, Cambridge report DAMTP 2009/NA06) runs from the same
+ * starts and
  * takes over. The better optimum wins. Cells at 0% and 100% need no special handling (0 ln 0 = 0).
  * <p>
  * Refuses, with {@link NotIdentifiableException}, data with fewer than 2 distinct values or with every
@@ -43,7 +46,7 @@ public final class PsychometricFitter {
     static final double DISTINCT_START = 0.3;
     private static final double INITIAL_RADIUS = 0.2;
     private static final double STOPPING_RADIUS = 1e-9;
-    private static final int MAX_EVALUATIONS = 5000;
+    private static final int MAX_EVALUATIONS = 3000;
     private static final double BOUND_TOLERANCE = 1e-6;
     /** A log-likelihood difference too small to matter (far below the 0.5 of a 1-sd likelihood interval). */
     private static final double FLAT_LOG_LIKELIHOOD = 1e-6;
@@ -76,24 +79,33 @@ public final class PsychometricFitter {
         return fit(data, extraStart, false);
     }
 
-    /** @param derivativeFreeOnly skip Fisher scoring (tests compare the two optimisers) */
+    /** @param derivativeFreeOnly skip Newton/scoring (tests compare the two optimisers) */
     FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly) {
         Objective objective = new Objective(data, options);
         double[][] starts = starts(objective, data, extraStart);
         double[] best = null;
         double bestValue = Double.POSITIVE_INFINITY;
         boolean bestDerivativeFree = false;
-        for (double[] start : starts) {
-            double[] p = derivativeFreeOnly ? null : FisherScoring.maximise(objective, start, best);
-            boolean fallback = p == null;
-            if (fallback) {
-                p = boundedSearch(objective, start);
+        if (!derivativeFreeOnly) {
+            for (double[] start : starts) {
+                double[] p = NewtonScoring.maximise(objective, start, best);
+                double v = p == null ? Double.POSITIVE_INFINITY : objective.value(p);
+                if (v < bestValue) {
+                    best = p;
+                    bestValue = v;
+                }
             }
-            double v = objective.value(p);
-            if (v < bestValue) {
-                best = p;
-                bestValue = v;
-                bestDerivativeFree = fallback;
+        }
+        if (best == null) {
+            // Newton failed from every start (singular information, e.g. separated data), or was not wanted
+            for (double[] start : starts) {
+                double[] p = boundedSearch(objective, start);
+                double v = objective.value(p);
+                if (v < bestValue) {
+                    best = p;
+                    bestValue = v;
+                    bestDerivativeFree = true;
+                }
             }
         }
         PsychometricFunction f = objective.function(best);
@@ -159,6 +171,8 @@ public final class PsychometricFitter {
             try {
                 return optimizer.optimize(new MaxEval(MAX_EVALUATIONS), new ObjectiveFunction(tracked), GoalType.MINIMIZE,
                         new InitialGuess(from), new SimpleBounds(objective.lowerBounds(), objective.upperBounds())).getPoint();
+            } catch (TooManyEvaluationsException e) {
+                return tracked.point.clone(); // a flat ridge: the best point met is as good as any
             } catch (MathIllegalStateException e) {
                 from = tracked.point.clone();
             }

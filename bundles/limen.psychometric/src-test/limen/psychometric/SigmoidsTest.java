@@ -86,6 +86,41 @@ class SigmoidsTest {
     }
 
     @Test
+    void secondDerivativeMatchesCentralDifferenceOfTheFirst() {
+        for (Sigmoid s : Sigmoids.builtIns()) {
+            for (double[] p : PARAMS) {
+                for (double q : new double[] { 0.02, 0.3, 0.5, 0.77, 0.97 }) {
+                    double x = s.inverse(q, p[0], p[1]);
+                    double h = 1e-5 * Math.abs(x);
+                    double fd = (s.derivative(x + h, p[0], p[1]) - s.derivative(x - h, p[0], p[1])) / (2 * h);
+                    double scale = s.derivative(x, p[0], p[1]) / Math.abs(x);
+                    assertEquals(fd, s.secondDerivative(x, p[0], p[1]), 1e-5 * (Math.abs(fd) + scale), s + " q=" + q);
+                }
+            }
+        }
+    }
+
+    @Test
+    void evaluateAgreesWithTheSingleMethods() {
+        double[] out = new double[4];
+        for (Sigmoid s : Sigmoids.builtIns()) {
+            for (double[] p : PARAMS) {
+                for (double q : new double[] { 1e-6, 0.02, 0.3, 0.5, 0.77, 0.97, 1 - 1e-9 }) {
+                    double x = s.inverse(q, p[0], p[1]);
+                    s.evaluate(x, p[0], p[1], out);
+                    assertEquals(s.value(x, p[0], p[1]), out[0], 1e-15 * Math.max(1e-300, out[0]) + 1e-300, s + " F q=" + q);
+                    assertEquals(s.complementValue(x, p[0], p[1]), out[1], 2e-15 * out[1] + 1e-300, s + " 1-F q=" + q);
+                    assertEquals(s.derivative(x, p[0], p[1]), out[2], 1e-13 * out[2], s + " F' q=" + q);
+                    assertEquals(s.secondDerivative(x, p[0], p[1]), out[3], 1e-12 * Math.abs(out[3]) + 1e-300, s + " F'' q=" + q);
+                }
+            }
+        }
+        Sigmoids.WEIBULL.evaluate(-1, 1, 2, out);
+        assertEquals(0.0, out[0]);
+        assertEquals(1.0, out[1]);
+    }
+
+    @Test
     void inverseRoundTrips() {
         for (Sigmoid s : Sigmoids.builtIns()) {
             for (double[] p : PARAMS) {

@@ -39,6 +39,24 @@ final class GumbelSigmoid implements Sigmoid {
         return e == Double.POSITIVE_INFINITY ? 0.0 : e * Math.exp(-e) / spread;
     }
 
+    /** F'' = F' (1 − e^z)/S, z = (x − M)/S. */
+    @Override
+    public double secondDerivative(double x, double location, double spread) {
+        double e = Math.exp((x - location) / spread);
+        return e == Double.POSITIVE_INFINITY ? 0.0 : derivative(x, location, spread) * (1 - e) / spread;
+    }
+
+    @Override
+    public void evaluate(double x, double location, double spread, double[] out) {
+        checkParameters(location, spread);
+        double ez = Math.exp((x - location) / spread);
+        double t = Math.exp(-ez);
+        out[0] = -Math.expm1(-ez);
+        out[1] = t;
+        out[2] = ez == Double.POSITIVE_INFINITY ? 0.0 : ez * t / spread;
+        out[3] = ez == Double.POSITIVE_INFINITY ? 0.0 : out[2] * (1 - ez) / spread;
+    }
+
     @Override
     public double inverse(double p, double location, double spread) {
         checkParameters(location, spread);

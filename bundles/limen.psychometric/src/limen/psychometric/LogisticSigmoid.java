@@ -44,6 +44,26 @@ final class LogisticSigmoid implements Sigmoid {
         return e / ((1.0 + e) * (1.0 + e) * spread);
     }
 
+    /** F'' = F'(1 − 2F)/S. */
+    @Override
+    public double secondDerivative(double x, double location, double spread) {
+        double f = value(x, location, spread);
+        return derivative(x, location, spread) * (1 - 2 * f) / spread;
+    }
+
+    @Override
+    public void evaluate(double x, double location, double spread, double[] out) {
+        checkParameters(location, spread);
+        double z = (x - location) / spread;
+        double e = Math.exp(-Math.abs(z)); // one exponential serves all four
+        double big = 1.0 / (1.0 + e);
+        double small = e / (1.0 + e);
+        out[0] = z >= 0 ? big : small;
+        out[1] = z >= 0 ? small : big;
+        out[2] = big * small / spread;
+        out[3] = out[2] * (out[1] - out[0]) / spread;
+    }
+
     @Override
     public double inverse(double p, double location, double spread) {
         checkParameters(location, spread);

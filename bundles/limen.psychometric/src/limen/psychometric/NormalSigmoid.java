@@ -46,6 +46,29 @@ final class NormalSigmoid implements Sigmoid {
         return INV_SQRT_2PI * Math.exp(-0.5 * z * z) / spread;
     }
 
+    /** F'' = −z φ(z)/S², z = (x − M)/S. */
+    @Override
+    public double secondDerivative(double x, double location, double spread) {
+        double z = (x - location) / spread;
+        return -z * derivative(x, location, spread) / spread;
+    }
+
+    @Override
+    public void evaluate(double x, double location, double spread, double[] out) {
+        checkParameters(location, spread);
+        double z = (x - location) / spread;
+        // one erfc, on the side where it keeps relative accuracy; the other side by subtraction from 1
+        if (z < 0) {
+            out[0] = phi(z);
+            out[1] = 1 - out[0];
+        } else {
+            out[1] = phi(-z);
+            out[0] = 1 - out[1];
+        }
+        out[2] = INV_SQRT_2PI * Math.exp(-0.5 * z * z) / spread;
+        out[3] = -z * out[2] / spread;
+    }
+
     @Override
     public double inverse(double p, double location, double spread) {
         checkParameters(location, spread);

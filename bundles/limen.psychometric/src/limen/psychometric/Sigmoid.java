@@ -44,6 +44,28 @@ public interface Sigmoid {
     double derivative(double x, double location, double spread);
 
     /**
+     * @return d²F/dx² at x (the built-in families give it in closed form; the default is a central
+     *         difference of {@link #derivative}, step 1e-5 of max(|x|, spread))
+     */
+    default double secondDerivative(double x, double location, double spread) {
+        double h = 1e-5 * Math.max(Math.abs(x), spread);
+        return (derivative(x + h, location, spread) - derivative(x - h, location, spread)) / (2 * h);
+    }
+
+    /**
+     * All four of F, 1 − F, dF/dx and d²F/dx² at once, for fitters that need them together (the built-in
+     * families share their exponentials between them; the default calls the single methods).
+     *
+     * @param out filled with {F, 1 − F, F', F''} (length &ge; 4)
+     */
+    default void evaluate(double x, double location, double spread, double[] out) {
+        out[0] = value(x, location, spread);
+        out[1] = complementValue(x, location, spread);
+        out[2] = derivative(x, location, spread);
+        out[3] = secondDerivative(x, location, spread);
+    }
+
+    /**
      * @param p a proportion with 0 &lt; p &lt; 1
      * @return x with F(x) = p
      * @throws IllegalArgumentException unless 0 &lt; p &lt; 1

@@ -58,6 +58,35 @@ final class WeibullSigmoid implements Sigmoid {
         return spread * u / x * Math.exp(-u);
     }
 
+    /** F'' = F' ((B − 1) − B (x/A)^B) / x for x &gt; 0, else 0. */
+    @Override
+    public double secondDerivative(double x, double location, double spread) {
+        if (!(x > 0)) {
+            checkParameters(location, spread);
+            return 0.0;
+        }
+        double u = Math.pow(x / location, spread);
+        return derivative(x, location, spread) * ((spread - 1) - spread * u) / x;
+    }
+
+    @Override
+    public void evaluate(double x, double location, double spread, double[] out) {
+        checkParameters(location, spread);
+        if (!(x > 0)) {
+            out[0] = 0;
+            out[1] = 1;
+            out[2] = 0;
+            out[3] = 0;
+            return;
+        }
+        double t = Math.pow(x / location, spread);
+        double e = Math.exp(-t);
+        out[0] = -Math.expm1(-t);
+        out[1] = e;
+        out[2] = spread * t / x * e;
+        out[3] = out[2] * ((spread - 1) - spread * t) / x;
+    }
+
     @Override
     public double inverse(double p, double location, double spread) {
         checkParameters(location, spread);

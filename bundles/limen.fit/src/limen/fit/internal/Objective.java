@@ -116,73 +116,113 @@ public final class Objective implements MultivariateFunction {
         double l = lapse(c);
         double r = 1 - g - l;
         double sum = 0;
+        double[] e = new double[4];
         for (int i = 0; i < u.length; i++) {
-            double f = working.value(u[i], m, s);
+            working.evaluate(u[i], m, s, e);
             int ki = k[i];
             int misses = n[i] - ki;
             if (ki > 0) {
-                sum += ki * Math.log(Math.max(g + r * f, Double.MIN_NORMAL));
+                sum += ki * Math.log(Math.max(g + r * e[0], Double.MIN_NORMAL));
             }
             if (misses > 0) {
-                double fc = f < 0.5 ? 1 - f : working.complementValue(u[i], m, s);
-                sum += misses * Math.log(Math.max(l + r * fc, Double.MIN_NORMAL));
+                sum += misses * Math.log(Math.max(l + r * e[1], Double.MIN_NORMAL));
             }
         }
         return -sum;
     }
 
     /**
-     * The score (gradient of ln L) and the expected (Fisher) information with respect to the working
-     * coordinates, for Fisher scoring:
+     * The score (gradient of ln L), the expected (Fisher) information and the observed information (minus
+     * the Hessian of ln L) with respect to the working coordinates:
      * <pre>
-     *   g_j  = Σ_i (k_i − n_i ψ_i) ∂_j ψ_i / (ψ_i (1 − ψ_i))
-     *   I_jl = Σ_i n_i ∂_j ψ_i ∂_l ψ_i / (ψ_i (1 − ψ_i))
+     *   g_a  = Σ_i ρ_i ∂_a ψ_i,                       ρ_i = (k_i − n_i ψ_i) / (ψ_i (1 − ψ_i))
+     *   I_ab = Σ_i n_i ∂_a ψ_i ∂_b ψ_i / (ψ_i (1 − ψ_i))
+     *   J_ab = Σ_i [k_i/ψ_i² + (n_i − k_i)/(1 − ψ_i)²] ∂_a ψ_i ∂_b ψ_i − ρ_i ∂_a∂_b ψ_i
      * </pre>
-     * with ∂ψ/∂c0 = −(1−γ−λ) R dF/du, ∂ψ/∂c1 = −(1−γ−λ)(u − m) dF/du, ∂ψ/∂c2 = γmax (1 − F), ∂ψ/∂c3 = −λmax F
-     * (u the working stimulus, m the working location, dF/du = x dF/dx on the Weibull's log axis).
+     * With F(u; m, s), F_u and F_uu its u-derivatives, r = 1 − γ − λ, m = u_mid + c0 R, s = R e^c1:
+     * ∂F/∂c0 = −R F_u, ∂F/∂c1 = −(u − m) F_u, ∂²F/∂c0² = R² F_uu, ∂²F/∂c0∂c1 = R (F_u + (u − m) F_uu),
+     * ∂²F/∂c1² = (u − m)(F_u + (u − m) F_uu); ∂ψ/∂c_{0,1} = r ∂F/∂c_{0,1}, ∂ψ/∂c2 = γmax (1 − F),
+     * ∂ψ/∂c3 = −λmax F, ∂²ψ/∂c2∂c_{0,1} = −γmax ∂F/∂c_{0,1}, ∂²ψ/∂c3∂c_{0,1} = −λmax ∂F/∂c_{0,1}, and the
+     * remaining second derivatives in c2, c3 are 0.
      *
-     * @param score       filled with g (length {@link #dimension()})
-     * @param information filled with I (dimension × dimension)
+     * @param score    filled with g (length {@link #dimension()})
+     * @param expected filled with I (dimension × dimension)
+     * @param observed filled with J (dimension × dimension), or null
      */
-    public void scoreAndInformation(double[] c, double[] score, double[][] information) {
+    public void scoreAndInformation(double[] c, double[] score, double[][] expected, double[][] observed) {
         double mU = workingLocation(c);
         double s = workingScale(c);
         double g = guess(c);
         double l = lapse(c);
         double r = 1 - g - l;
+        int gi = options.guessFree() ? 2 : -1;
+        int li = options.lapseFree() ? (gi < 0 ? 2 : 3) : -1;
         java.util.Arrays.fill(score, 0);
-        for (double[] row : information) {
-            java.util.Arrays.fill(row, 0);
+        for (int a = 0; a < dimension; a++) {
+            java.util.Arrays.fill(expected[a], 0);
+            if (observed != null) {
+                java.util.Arrays.fill(observed[a], 0);
+            }
         }
         double[] d = new double[dimension];
+        double[][] dd = new double[dimension][dimension];
+        double[] e = new double[4];
         for (int i = 0; i < u.length; i++) {
-            double f = working.value(u[i], mU, s);
-            double fc = f < 0.5 ? 1 - f : working.complementValue(u[i], mU, s);
+            working.evaluate(u[i], mU, s, e);
+            double f = e[0];
+            double fc = e[1];
             double psi = g + r * f;
             double q = l + r * fc;
-            double dFdu = working.derivative(u[i], mU, s);
-            d[0] = -r * range * dFdu;
-            d[1] = -r * (u[i] - mU) * dFdu;
-            int j = 2;
-            if (options.guessFree()) {
-                d[j++] = options.guessMax() * fc;
+            double fu = e[2];
+            double du = u[i] - mU;
+            double f0 = -range * fu;
+            double f1 = -du * fu;
+            d[0] = r * f0;
+            d[1] = r * f1;
+            if (gi > 0) {
+                d[gi] = options.guessMax() * fc;
             }
-            if (options.lapseFree()) {
-                d[j] = -options.lapseMax() * f;
+            if (li > 0) {
+                d[li] = -options.lapseMax() * f;
             }
-        double w = 1 / Math.max(psi * q, Double.MIN_NORMAL);
-            double residual = (k[i] - n[i] * psi) * w;
+            double pq = Math.max(psi * q, Double.MIN_NORMAL);
+            double rho = (k[i] - n[i] * psi) / pq;
+            double w = n[i] / pq;
             for (int a = 0; a < dimension; a++) {
-                score[a] += residual * d[a];
-                double na = n[i] * w * d[a];
+                score[a] += rho * d[a];
                 for (int b = 0; b <= a; b++) {
-                    information[a][b] += na * d[b];
+                    expected[a][b] += w * d[a] * d[b];
+                }
+            }
+            if (observed != null) {
+                double fuu = e[3];
+                dd[0][0] = r * range * range * fuu;
+                dd[1][0] = r * range * (fu + du * fuu);
+                dd[1][1] = r * du * (fu + du * fuu);
+                if (gi > 0) {
+                    dd[gi][0] = -options.guessMax() * f0;
+                    dd[gi][1] = -options.guessMax() * f1;
+                }
+                if (li > 0) {
+                    dd[li][0] = -options.lapseMax() * f0;
+                    dd[li][1] = -options.lapseMax() * f1;
+                }
+                double psiSafe = Math.max(psi, Double.MIN_NORMAL);
+                double qSafe = Math.max(q, Double.MIN_NORMAL);
+                double curvature = k[i] / (psiSafe * psiSafe) + (n[i] - k[i]) / (qSafe * qSafe);
+                for (int a = 0; a < dimension; a++) {
+                    for (int b = 0; b <= a; b++) {
+                        observed[a][b] += curvature * d[a] * d[b] - rho * dd[a][b];
+                    }
                 }
             }
         }
         for (int a = 0; a < dimension; a++) {
             for (int b = 0; b < a; b++) {
-                information[b][a] = information[a][b];
+                expected[b][a] = expected[a][b];
+                if (observed != null) {
+                    observed[b][a] = observed[a][b];
+                }
             }
         }
     }
