@@ -18,7 +18,7 @@ import limen.signal.internal.Phase;
 public final class Synthesis {
 
     /** Samples per block of the angle-addition scheme. */
-    public static final int BLOCK = 64;
+    public static final int BLOCK = 256;
 
     private Synthesis() {
     }
