@@ -92,24 +92,21 @@ public final class PsiTables {
     public double[] informationGains(double[] w) {
         final int nc = candidates;
         final float[] t = table;
-        double[] pSum = new double[nc];
-        double[] hSum = new double[nc];
-        for (int k = 0, base = 0; k < points; k++, base += 2 * nc) {
+        final int row = 2 * nc;
+        // acc[0..C) sums w·ψ, acc[C..2C) sums w·h(ψ): one contiguous row per point, one vectorisable loop
+        double[] acc = new double[row];
+        for (int k = 0, base = 0; k < points; k++, base += row) {
             double wk = w[k];
             if (wk < NEGLIGIBLE_WEIGHT) {
                 continue;
             }
-            for (int c = 0; c < nc; c++) {
-                pSum[c] += wk * t[base + c];
-            }
-            int hb = base + nc;
-            for (int c = 0; c < nc; c++) {
-                hSum[c] += wk * t[hb + c];
+            for (int j = 0; j < row; j++) {
+                acc[j] += wk * t[base + j];
             }
         }
         double[] g = new double[nc];
         for (int c = 0; c < nc; c++) {
-            g[c] = binaryEntropy(Math.min(Math.max(pSum[c], 0), 1)) - hSum[c];
+            g[c] = binaryEntropy(Math.min(Math.max(acc[c], 0), 1)) - acc[nc + c];
         }
         return g;
     }
