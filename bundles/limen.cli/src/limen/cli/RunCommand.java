@@ -160,6 +160,13 @@ public final class RunCommand implements Callable<Integer> {
                 runner.addListener(progress(err));
             }
             SessionStatusInfo info = runner.run();
+            List<Double> turn = new java.util.ArrayList<>(runner.turnaroundMillis());
+            if (!turn.isEmpty() && !quiet) {
+                java.util.Collections.sort(turn);
+                err.println(String.format(Locale.ROOT, "limen run: answer to next trial ready: median %.2f ms, "
+                        + "90th percentile %.2f ms over %d trials", turn.get(turn.size() / 2),
+                        turn.get((int) (turn.size() * 0.9)), turn.size()));
+            }
             err.println("limen run: " + info.status().getLiteral().toLowerCase(Locale.ROOT) + ": " + info.trials()
                     + " trials in " + info.folder() + (info.status() == SessionStatus.COMPLETED ? "" : " (" + info.message() + ")"));
             if (resume != null) {

@@ -18,8 +18,8 @@ import limen.psychometric.Sigmoids;
  * ψ(x; α, β, λ) = γ + (1 − γ − λ) F(x; α, β), γ fixed by the task. The prior is Gaussian on α
  * (mean, sd set by the author; sd = ∞ flat) and uniform over the β and λ grids. The lapse is fixed
  * (a one-point λ grid) or marginalised over a small λ grid: the entropy is then that of the joint
- * (α, β, λ) posterior, and estimates of α and β are marginal over λ. Kontsevich &amp; Tyler's
- * marginal-entropy refinement for nuisance parameters is not implemented.
+ * (α, β, λ) posterior, and estimates of α and β are marginal over λ. The psi-marginal refinement
+ * (Prins 2013, Journal of Vision 13(7):3: the entropy of the (α, β) marginal only) is not implemented.
  */
 public final class PsiSettings implements ProcedureFactory {
 

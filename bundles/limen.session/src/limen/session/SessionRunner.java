@@ -64,6 +64,13 @@ public final class SessionRunner {
     private final boolean realtime;
     private final SafetyGuard guard;
     private Exposure exposure = Exposure.none();
+    private final List<Double> turnaround = new ArrayList<>();
+    private final java.util.concurrent.ExecutorService prefetcher = java.util.concurrent.Executors
+            .newSingleThreadExecutor(r -> {
+                Thread t = new Thread(r, "limen-trial-prefetch");
+                t.setDaemon(true);
+                return t;
+            });
 
     private SessionRunner(SessionFolder folder, SessionHeader header, TrialOutput output, Responder responder,
             TrialRenderer renderer, SessionControl control, boolean realtime, Clock clock) {
@@ -118,6 +125,10 @@ public final class SessionRunner {
         SplittableRandom master = new SplittableRandom(seed);
         Map<String, Double> results = new HashMap<>();
         int replayed = 0;
+        java.util.concurrent.Future<CheckedStimulus> prefetched = null;
+        TrialPlan prefetchedPlan = null;
+        long prefetchedSeq = -1;
+        long answeredAt = 0;
         try (JournalWriter journal = folder.openJournalForAppend(existing)) {
             for (int s = 0; s < order.size(); s++) {
                 Step step = order.get(s);
@@ -155,9 +166,17 @@ public final class SessionRunner {
                     if (!control.awaitRunnable()) {
                         return finish(journal, SessionStatus.ABORTED, "aborted: " + control.reason());
                     }
-                    long trialSeed = new SplittableRandom(seed ^ (0x9E3779B97F4A7C15L * journal.nextSeq())).nextLong();
-                    Stimulus raw = renderer.render(step, plan, standardLevel, new SplittableRandom(trialSeed));
-                    CheckedStimulus sound = guard.check(raw);
+                    CheckedStimulus sound;
+                    if (prefetched != null && prefetchedPlan == plan && prefetchedSeq == journal.nextSeq()) {
+                        sound = await(prefetched);
+                    } else {
+                        sound = renderChecked(step, plan, standardLevel, journal.nextSeq());
+                    }
+                    prefetched = null;
+                    if (answeredAt != 0) {
+                        turnaround.add((System.nanoTime() - answeredAt) / 1e6);
+                        answeredAt = 0;
+                    }
                     TrialContext ctx = new TrialContext(journal.nextSeq(), s + 1, order.size(), step, track.name(),
                             track.task(), plan, sound, trialInStep);
                     try {
@@ -172,7 +191,17 @@ public final class SessionRunner {
                     if (response == null) {
                         return finish(journal, SessionStatus.ABORTED, "aborted while waiting for an answer");
                     }
+                    answeredAt = System.nanoTime();
                     TrialOutcome outcome = interleaver.answer(response.answer());
+                    if (!interleaver.finished()) {
+                        // render the next trial while this one is being synced to disk
+                        TrialPlan next = interleaver.nextTrial();
+                        long nextSeq = journal.nextSeq() + 1;
+                        double level = standardLevel;
+                        prefetchedPlan = next;
+                        prefetchedSeq = nextSeq;
+                        prefetched = prefetcher.submit(() -> renderChecked(step, next, level, nextSeq));
+                    }
                     JournalRow row = journal.append(new JournalRow(journal.nextSeq(), Instant.now(clock), step.getId(),
                             s + 1, track.name(), plan.value(), unitOf(step), outcome.correct(),
                             journalResponse(plan, response.answer()), response.responseMs(), targetLevel(sound), journalTarget(plan),
@@ -183,7 +212,9 @@ public final class SessionRunner {
                     SessionListener.TrackState state = stateOf(track);
                     listeners.forEach(l -> l.trialRecorded(row, outcome, state));
                     if (realtime && step.getTask() != null) {
+                        long sleptFrom = System.nanoTime();
                         Thread.sleep(Math.round(step.getTask().getInterTrialIntervalSeconds() * 1000));
+                        answeredAt += System.nanoTime() - sleptFrom; // the designed interval does not count
                     }
                 }
                 double estimate = stepEstimate(tracks);
@@ -201,7 +232,33 @@ public final class SessionRunner {
         }
     }
 
+    private CheckedStimulus renderChecked(Step step, TrialPlan plan, double standardLevel, long seq) {
+        long trialSeed = new SplittableRandom(header.getRandomSeed() ^ (0x9E3779B97F4A7C15L * seq)).nextLong();
+        Stimulus raw = renderer.render(step, plan, standardLevel, new SplittableRandom(trialSeed));
+        return guard.check(raw);
+    }
+
+    private static CheckedStimulus await(java.util.concurrent.Future<CheckedStimulus> f) throws InterruptedException {
+        try {
+            return f.get();
+        } catch (java.util.concurrent.ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
+    }
+
+    /**
+     * Milliseconds from each answer to the next trial's checked sound being ready to play (the designed
+     * inter-trial interval excluded), for the trials of this run.
+     */
+    public List<Double> turnaroundMillis() {
+        return List.copyOf(turnaround);
+    }
+
     private SessionStatusInfo finish(JournalWriter journal, SessionStatus status, String message) throws IOException {
+        prefetcher.shutdownNow();
         header.setEndTime(Instant.now(clock));
         header.setStatus(status);
         folder.recordExposure(exposure);

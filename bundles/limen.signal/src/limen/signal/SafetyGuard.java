@@ -57,9 +57,15 @@ public final class SafetyGuard {
         }
         checkDeclared(stimulus.components());
         double[] measured = new double[OutputFormat.CHANNELS];
+        LevelBound.Result first = null;
         for (int c = 0; c < OutputFormat.CHANNELS; c++) {
             double[] x = stimulus.channelArray(c);
-            LevelBound.Result r = bound.measure(x);
+            // both ears get the same samples for most stimuli: measure once (same input, same result)
+            LevelBound.Result r = c > 0 && java.util.Arrays.equals(x, stimulus.channelArray(0)) ? first
+                    : bound.measure(x);
+            if (c == 0) {
+                first = r;
+            }
             measured[c] = r.levelDbSpl();
             if (r.levelDbSpl() > calibration.ceilingDbSpl()) {
                 double dominant = dominantHz(x, r.windowStartSample(), r.windowSamples());
