@@ -114,6 +114,21 @@ class UpDownStaircaseTest {
         assertFalse(p.estimate().available());
     }
 
+    /**
+     * Targets of the run-counter chain against closed forms: Levitt (1971) p^n = 1/2 for n-down/1-up and,
+     * by the same argument on wrong runs, (1 - p)^m = 1/2 for 1-down/m-up; a symmetric 2-down/2-up rule
+     * with equal steps balances at p = 1/2 by symmetry; Kaernbach (1991) p S_down = (1 - p) S_up.
+     */
+    @Test
+    void targetsOfTheRunCounterChainMatchClosedForms() {
+        for (int n = 1; n <= 4; n++) {
+            assertEquals(Math.pow(0.5, 1.0 / n), UpDownSettings.builder().rule(n, 1).start(0).build().targetProbability(), 1e-9);
+        }
+        assertEquals(1 - Math.sqrt(0.5), UpDownSettings.builder().rule(1, 2).start(0).build().targetProbability(), 1e-9);
+        assertEquals(0.5, UpDownSettings.builder().rule(2, 2).start(0).build().targetProbability(), 1e-9);
+        assertEquals(0.8, UpDownSettings.builder().rule(1, 1).upDownStepRatio(4).start(0).build().targetProbability(), 1e-9);
+    }
+
     @Test
     void rejectsBadSettingsNamingTheValue() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
