@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Runs every Limen test on a fresh Debian machine: installs missing system packages (when run as root),
 # starts a virtual display and a virtual sound device when there are none (and stops them by PID), then runs
-# ./mvnw verify (plain JUnit 5 in the bundles, OSGi/UI tests under tycho-surefire, the product smoke test).
+# ./mvnw verify (plain JUnit 5 in the bundles, OSGi/UI tests under tycho-surefire, the product smoke test),
+# then checks that regenerating the EMF model code gives no difference.
 # Extra arguments go to Maven, e.g. releng/run-tests.sh -o -pl bundles/limen.fit -am
 set -euo pipefail
 top=$(cd "$(dirname "$0")/.." && pwd)
@@ -68,3 +69,9 @@ PA
 fi
 
 "$top/mvnw" -B verify "$@"
+
+# The checked-in EMF code must be exactly what the generator writes from the model.
+if [ -z "${LIMEN_SKIP_MODEL_CHECK:-}" ]; then
+  echo "run-tests: checking that regenerating the EMF model code gives no difference" >&2
+  "$top/releng/regenerate-model.sh" check
+fi
