@@ -101,6 +101,28 @@ class PsychometricFitterTest {
         assertEquals(w.logLikelihood(), g.logLikelihood(), 1e-9);
     }
 
+    /**
+     * Two different optimisers on the same likelihood: on 60 simulated 2AFC data sets (8 levels x 50 trials,
+     * lapse bounded, including replicates that fit poorly or drift toward a step) the fast path (Newton with
+     * scoring) must reach a log-likelihood at least as high as BOBYQA alone, to 1e-6.
+     */
+    @Test
+    void fastPathIsNeverWorseThanTheDerivativeFreeOptimiser() {
+        PsychometricFunction truth = new PsychometricFunction(Sigmoids.WEIBULL, 26.5, 3.3, 0.5, 0.02);
+        double[] x = { 10, 15, 20, 25, 30, 35, 40, 45 };
+        int[] n = new int[x.length];
+        java.util.Arrays.fill(n, 50);
+        PsychometricFitter fitter = new PsychometricFitter(FitOptions.of(Sigmoids.WEIBULL).withGuess(0.5).withLapseMax(0.06));
+        BinomialData template = new BinomialData(x, n, new int[x.length]);
+        for (int r = 0; r < 60; r++) {
+            BinomialData d = Bootstrap.simulate(template, truth, false, 1000 + r);
+            FitResult fast = fitter.fit(d, null, false);
+            FitResult slow = fitter.fit(d, null, true);
+            assertTrue(fast.logLikelihood() >= slow.logLikelihood() - 1e-6,
+                    d + ": fast " + fast.logLikelihood() + " < BOBYQA " + slow.logLikelihood());
+        }
+    }
+
     @Test
     void optionsAreValidated() {
         assertThrows(IllegalArgumentException.class, () -> FitOptions.of(Sigmoids.LOGISTIC).withLapseMax(1.2));
