@@ -20,19 +20,17 @@ import org.apache.commons.csv.CSVRecord;
 
 import limen.fit.BinomialData;
 import limen.fit.Bootstrap;
-import limen.fit.BootstrapOptions;
 import limen.fit.BootstrapResult;
 import limen.fit.CancellationFlag;
 import limen.fit.ConfidenceInterval;
 import limen.fit.FitOptions;
 import limen.fit.FitResult;
+import limen.fit.FitSettings;
 import limen.fit.IntervalMethod;
 import limen.fit.NotIdentifiableException;
 import limen.fit.Progress;
 import limen.fit.PsychometricFitter;
 import limen.psychometric.ListenerSpec;
-import limen.psychometric.Sigmoid;
-import limen.psychometric.Sigmoids;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -45,10 +43,10 @@ import picocli.CommandLine.Model.CommandSpec;
  * {@link PsychometricFitter} and {@link Bootstrap} for the methods.
  */
 @Command(name = "fit", mixinStandardHelpOptions = true,
-        description = {"Fit a psychometric function psi = guess + (1 - guess - lapse) F(x) by maximum likelihood to a CSV",
-                "with header value,trials,correct; print one CSV row with a header to stdout.",
-                "Families: logistic F = 1/(1+exp(-(x-mid)/scale)), normal F = Phi((x-mid)/sd),",
-                "weibull F = 1-exp(-(x/alpha)^beta) (x > 0), gumbel F = 1-exp(-exp((x-mid)/scale))."},
+        description = {"Fit a psychometric function psi = guess + (1 - guess - lapse) F(x) by maximum likelihood to a CSV "
+                + "with header value,trials,correct; print one CSV row with a header to stdout.",
+                "Families: logistic F = 1/(1+exp(-(x-mid)/scale)); normal F = Phi((x-mid)/sd); "
+                + "weibull F = 1-exp(-(x/alpha)^beta), x > 0; gumbel F = 1-exp(-exp((x-mid)/scale)).", ""},
         footer = {"", "Columns: function,threshold,slope,guess,lapse,loglik,deviance,location,spread,target,trials,spec",
                 "[,threshold_f] and with --bootstrap: threshold_lo,threshold_hi,slope_lo,slope_hi,gof_p,ci_method,level,samples,excluded.",
                 "The threshold is where psi reaches --target (default: midway between guess and 1 - lapse); the slope is",
@@ -106,15 +104,15 @@ public final class FitCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
         PrintWriter out = spec.commandLine().getOut();
+        FitSettings settings;
         FitOptions options;
         BinomialData cells;
         IntervalMethod method;
         try {
-            options = options();
-            method = intervalMethod();
-            if (bootstrap < 0) {
-                throw new IllegalArgumentException("--bootstrap must be >= 0, was " + bootstrap);
-            }
+            settings = settings();
+            // no task known here: 'task' means free, as for yes/no
+            options = settings.fitOptions(Double.NaN);
+            method = settings.intervalMethod();
             cells = readData(data);
         } catch (IllegalArgumentException | IOException e) {
             err.println("limen fit: " + e.getMessage());
@@ -135,11 +133,7 @@ public final class FitCommand implements Callable<Integer> {
         }
         BootstrapResult boot = null;
         if (bootstrap > 0) {
-            BootstrapOptions bo = BootstrapOptions.parametric(bootstrap, seed).withNonparametric(nonparametric).withLevel(level);
-            if (threads != null) {
-                bo = bo.withParallelism(threads);
-            }
-            boot = new Bootstrap(bo).run(fit, new StderrProgress(err), new CancellationFlag());
+            boot = new Bootstrap(settings.bootstrapOptions()).run(fit, new StderrProgress(err), new CancellationFlag());
             if (boot.excludedReplicates() > 0) {
                 err.println("limen fit: warning: " + boot.excludedReplicates() + " of " + bootstrap
                         + " bootstrap replicates left out (no threshold: flat simulated data or target not reached)");
@@ -150,37 +144,10 @@ public final class FitCommand implements Callable<Integer> {
         return 0;
     }
 
-    private FitOptions options() {
-        Sigmoid sigmoid = Sigmoids.byName(function);
-        FitOptions o = FitOptions.of(sigmoid);
-        if (guess.trim().equalsIgnoreCase("free")) {
-            o = o.withFreeGuess(FitOptions.DEFAULT_GUESS_MAX);
-        } else {
-            try {
-                o = o.withGuess(Double.parseDouble(guess.trim()));
-            } catch (NumberFormatException e) {
-                throw new IllegalArgumentException("--guess must be a number or 'free', was '" + guess + "'");
-            }
-        }
-        o = lapse != null ? o.withLapse(lapse) : o.withLapseMax(lapseMax);
-        if (target != null) {
-            o = o.withTargetPsi(target);
-        }
-        if (targetF != null) {
-            o = o.withTargetF(targetF);
-        }
-        return o;
-    }
-
-    private IntervalMethod intervalMethod() {
-        switch (ciMethod.trim().toLowerCase(Locale.ROOT)) {
-        case "percentile":
-            return IntervalMethod.PERCENTILE;
-        case "bca":
-            return IntervalMethod.BCA;
-        default:
-            throw new IllegalArgumentException("--ci-method must be percentile or bca, was '" + ciMethod + "'");
-        }
+    /** The settings as parsed by {@link FitSettings#parse}, shared with {@code ./limen refit}. */
+    private FitSettings settings() {
+        return FitSettings.parse(function, guess, lapseMax, lapse, target, targetF, bootstrap, seed, ciMethod, level,
+                nonparametric, threads);
     }
 
     /**

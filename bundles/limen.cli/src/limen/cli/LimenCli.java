@@ -22,6 +22,7 @@ import picocli.CommandLine.IVersionProvider;
                 CommandLine.HelpCommand.class,
                 CheckCommand.class,
                 FitCommand.class,
+                RefitCommand.class,
                 RenderCommand.class,
                 SimulateCommand.class,
                 SelftestCommand.class,
