@@ -86,6 +86,22 @@ class LoadFailureTest {
     }
 
     @Test
+    void referencesToTheNetworkAreNeverFollowed() throws IOException {
+        IOException refused = org.junit.jupiter.api.Assertions.assertThrows(IOException.class,
+                () -> LimenFiles.newResourceSet().getURIConverter()
+                        .createInputStream(URI.createURI("http://192.0.2.1/lab.battery")));
+        assertTrue(refused.getMessage().contains("only local files"), refused.getMessage());
+        Path battery = dir.resolve("remote.battery");
+        Files.writeString(battery, Files.readString(TestPaths.fixtures().resolve("valid-base.battery")).replace(
+                "<standardLevel xsi:type=\"limen:RelativeLevel\" reference=\"abs-1000\" offsetDb=\"40\"/>",
+                "<standardLevel xsi:type=\"limen:RelativeLevel\" offsetDb=\"40\"><reference"
+                        + " href=\"http://192.0.2.1/lab.battery#abs-1000\"/></standardLevel>"));
+        List<Problem> problems = DocumentChecker.check(List.of(battery), null).problems();
+        assertTrue(problems.stream().anyMatch(p -> p.code() == ProblemCode.UNRESOLVED_REFERENCE
+                && p.message().contains("http://192.0.2.1/lab.battery#abs-1000")), problems.toString());
+    }
+
+    @Test
     void missingFilesAndFoldersAreUnreadable() {
         LoadResult missing = LimenFiles.load(dir.resolve("nowhere.battery"));
         assertFalse(missing.readable());

@@ -3,6 +3,8 @@ package limen.model.io;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -15,7 +17,11 @@ import org.eclipse.emf.common.util.URI;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.resource.Resource;
 import org.eclipse.emf.ecore.resource.ResourceSet;
+import org.eclipse.emf.ecore.resource.ContentHandler;
+import org.eclipse.emf.ecore.resource.impl.ExtensibleURIConverterImpl;
+import org.eclipse.emf.ecore.resource.impl.FileURIHandlerImpl;
 import org.eclipse.emf.ecore.resource.impl.ResourceSetImpl;
+import org.eclipse.emf.ecore.resource.impl.URIHandlerImpl;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 
 import limen.model.Battery;
@@ -60,6 +66,9 @@ public final class LimenFiles {
     /** @return a new resource set that reads and writes Limen files by their extensions */
     public static ResourceSet newResourceSet() {
         ResourceSet resources = new ResourceSetImpl();
+        // local files only: a reference or namespace in a file must never make Limen open a network connection
+        resources.setURIConverter(new ExtensibleURIConverterImpl(
+                List.of(new FileURIHandlerImpl(), new LocalFilesOnly()), ContentHandler.Registry.INSTANCE.contentHandlers()));
         resources.getPackageRegistry().put(LimenPackage.eNS_URI, LimenPackage.eINSTANCE);
         LimenResourceFactory factory = new LimenResourceFactory();
         Map<String, Object> byExtension = resources.getResourceFactoryRegistry().getExtensionToFactoryMap();
@@ -67,6 +76,29 @@ public final class LimenFiles {
         byExtension.put(CALIBRATION_EXTENSION, factory);
         byExtension.put(SESSION_EXTENSION, factory);
         return resources;
+    }
+
+    /** Answers every URI that is not a local file with an I/O error, which EMF reports as an unresolved item. */
+    private static final class LocalFilesOnly extends URIHandlerImpl {
+        @Override
+        public boolean canHandle(URI uri) {
+            return true;
+        }
+
+        @Override
+        public InputStream createInputStream(URI uri, Map<?, ?> options) throws IOException {
+            throw new IOException("Limen reads only local files, not " + uri);
+        }
+
+        @Override
+        public OutputStream createOutputStream(URI uri, Map<?, ?> options) throws IOException {
+            throw new IOException("Limen writes only local files, not " + uri);
+        }
+
+        @Override
+        public boolean exists(URI uri, Map<?, ?> options) {
+            return false;
+        }
     }
 
     /**

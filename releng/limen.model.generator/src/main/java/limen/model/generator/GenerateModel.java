@@ -39,9 +39,10 @@ import org.eclipse.emf.ecore.xmi.impl.EcoreResourceFactoryImpl;
  * Regenerates the EMF model code of {@code bundles/limen.model} from {@code model/limen.genmodel} without an
  * Eclipse IDE or workspace.
  * <p>
- * Usage: {@code GenerateModel BUNDLE_DIR [--edit EDIT_BUNDLE_DIR] [--init]}. {@code --init} writes a fresh
+ * Usage: {@code GenerateModel BUNDLE_DIR [--edit[=EDIT_BUNDLE_DIR]] [--init]}. {@code --init} writes a fresh
  * genmodel from {@code model/limen.ecore} when none exists (bootstrapping only; the checked-in genmodel is
- * the source afterwards). {@code --edit} also generates the EMF.Edit item providers into the given bundle.
+ * the source afterwards). {@code --edit} also generates the EMF.Edit item providers into the edit bundle,
+ * by default the sibling folder {@code BUNDLE_DIR.edit} ({@code limen.model.edit}).
  * <p>
  * Headless generation needs three things an IDE would otherwise provide: the bundle folder mapped as the
  * {@code platform:/resource/limen.model/} project, the GenModel generator adapter factory registered (without
@@ -62,21 +63,30 @@ public final class GenerateModel {
     public static void main(String[] args) throws Exception {
         Path bundle = null;
         Path edit = null;
+        boolean withEdit = false;
         boolean init = false;
-        for (int i = 0; i < args.length; i++) {
-            if (args[i].isBlank()) {
+        for (String arg : args) {
+            if (arg.isBlank()) {
                 continue; // an empty optional argument from the Maven profile
             }
-            switch (args[i]) {
-                case "--init" -> init = true;
-                case "--edit" -> edit = Path.of(args[++i]).toAbsolutePath().normalize();
-                default -> bundle = Path.of(args[i]).toAbsolutePath().normalize();
+            if (arg.equals("--init")) {
+                init = true;
+            } else if (arg.equals("--edit")) {
+                withEdit = true;
+            } else if (arg.startsWith("--edit=")) {
+                withEdit = true;
+                edit = Path.of(arg.substring("--edit=".length())).toAbsolutePath().normalize();
+            } else {
+                bundle = Path.of(arg).toAbsolutePath().normalize();
             }
         }
         if (bundle == null || !Files.isDirectory(bundle.resolve("model"))) {
-            System.err.println("usage: GenerateModel BUNDLE_DIR [--edit EDIT_BUNDLE_DIR] [--init]"
-                    + " (BUNDLE_DIR must contain model/limen.ecore)");
+            System.err.println("usage: GenerateModel BUNDLE_DIR [--edit[=EDIT_BUNDLE_DIR]] [--init]"
+                    + " (BUNDLE_DIR must contain model/limen.ecore; the edit bundle defaults to BUNDLE_DIR.edit)");
             System.exit(2);
+        }
+        if (withEdit && edit == null) {
+            edit = bundle.resolveSibling(bundle.getFileName() + ".edit");
         }
         System.exit(run(bundle, edit, init));
     }
