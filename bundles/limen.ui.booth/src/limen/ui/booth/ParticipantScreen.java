@@ -38,8 +38,11 @@ import limen.signal.IntervalMark;
 /**
  * The participant's full-screen shell: large interval indicators lit in step with the sound, big response
  * buttons (or number keys), feedback, progress, break and end screens. Nothing else is reachable from it: it has
- * no trim and no menus, refuses to close, swallows every key (so the workbench's key bindings and traversal never
- * see them) and is left only by the operator gesture {@link #EXIT_CHORD_MASK} + Q followed by the lab's PIN.
+ * no trim and no menus, refuses to close, turns off traversal (Esc, Tab), swallows every key before its widgets
+ * see it, and is left only by the operator gesture {@link #EXIT_CHORD_MASK} + Q followed by the lab's PIN. (The
+ * key filter is a display filter added when the screen opens; a filter added earlier, such as the workbench's
+ * key-binding dispatcher, still runs before it: that case is not covered by the tests, which run without the
+ * workbench.)
  * <p>
  * Timing: {@link #soundStarting} (called by {@link IndicatedOutput} just before {@code play}) fixes
  * {@code t0}; interval i is lit from {@code t0 + onset_i / fs} to {@code t0 + offset_i / fs}, taken from the
@@ -373,7 +376,8 @@ public final class ParticipantScreen implements Responder {
 
     private void showBreak(String message, double minimumSeconds) {
         instruction.setText(message + "\n\n" + (minimumSeconds > 0
-                ? String.format(Locale.ROOT, "You can go on after %.0f seconds: then press 1 or the button.", minimumSeconds)
+                ? String.format(Locale.ROOT, "You can go on after %.0f second%s: then press 1 or the button.",
+                        minimumSeconds, Math.round(minimumSeconds) == 1 ? "" : "s")
                 : "Press 1 or the button when you are ready to go on."));
         rebuild(0, false);
         feedbackLabel.setText("");

@@ -65,6 +65,8 @@ class BoothTest {
     private Path battery;
     /** Key presses the posted events did not deliver (then given to the screen's key handler directly). */
     private int fallbacks;
+    /** Break screens seen by {@link #answerUntilEnd}. */
+    private int breaks;
 
     @BeforeEach
     void setUp() throws Exception {
@@ -166,6 +168,18 @@ class BoothTest {
                 Screenshots.print(ps.shell().getChildren()[1], "participant-interval-lit");
                 litShot = true;
             }
+            if (ps.breakWaiting()) {
+                breaks++;
+                pumpUntil(() -> ps.message().contains("short rest"), 3000, "the break screen's message");
+                Screenshots.save(ps.shell(), "participant-break", 100);
+                typeKey('1'); // before the minimum pause: ignored
+                pump(50);
+                assertTrue(ps.breakWaiting(), "the break ended before its minimum duration");
+                pump(1100);
+                typeKey('1');
+                pumpUntil(() -> !ps.breakWaiting(), 3000, "the end of the break after a key press");
+                continue;
+            }
             TrialContext trial = ps.currentTrial();
             if (trial == null || !ps.acceptingAnswers()) {
                 continue;
@@ -234,6 +248,24 @@ class BoothTest {
         assertEquals("done", tracks.get(0)[5]);
         System.out.println("booth demo: " + rows.size() + " trials, key presses not delivered by Display.post: " + fallbacks);
         assertEquals(0, fallbacks, "posted key presses should reach the participant screen");
+    }
+
+    @Test
+    void breakScreenWaitsForTheParticipantBetweenParts() throws Exception {
+        OperatorConsolePart part = console();
+        part.choose(DemoLab.TWO_PARTS, "P-OTTER", BoothSession.OutputKind.NONE, false);
+        part.acknowledge();
+        part.start();
+        assertNotNull(part.session(), part.status());
+        List<Integer> pressed = answerUntilEnd(part, false);
+        assertEquals(SessionStatus.COMPLETED, part.lastEnd().status(), part.lastEnd().message());
+        assertEquals(1, breaks, "break screens");
+        List<JournalRow> rows = SessionFolder.open(part.lastEnd().folder()).readJournal().rows();
+        assertEquals(6, rows.size());
+        assertEquals(pressed.size(), rows.size());
+        for (int i = 0; i < 6; i++) {
+            assertEquals(i < 3 ? 1 : 2, rows.get(i).stepIndex(), "trial " + (i + 1));
+        }
     }
 
     @Test

@@ -27,6 +27,38 @@ final class DemoLab {
             </limen:Battery>
             """;
 
+    static final String TWO_PARTS = "booth-two-parts.battery";
+
+    /** Two steps of three trials each with a break between them (minimum 1 s). */
+    static final String TWO_PARTS_XML = """
+            <?xml version="1.0" encoding="UTF-8"?>
+            <limen:Battery xmi:version="2.0" xmlns:xmi="http://www.omg.org/XMI" xmlns:xsi="http://www.w3.org/2001/XMLSchema-instance" xmlns:limen="http://limen.dev/model/1.0" schemaVersion="1" title="Harbourside booth demo: two short parts with a break" calibrationFile="harbourside-demo.calibration" ordering="FIXED">
+              <steps id="fd-500-tiny" title="Frequency discrimination 500 Hz (three trials)">
+                <task xsi:type="limen:ForcedChoiceTask" intervalDurationSeconds="0.2" interTrialIntervalSeconds="0.1" feedback="false" intervalCount="2" interStimulusIntervalSeconds="0.1"/>
+                <stimulus standardFrequencyHz="500.0" rampDurationSeconds="0.02">
+                  <standardLevel xsi:type="limen:AbsoluteLevel" levelDbSpl="60.0"/>
+                </stimulus>
+                <variedQuantity unit="PERCENT" scale="LOG"/>
+                <tracks name="A">
+                  <procedure xsi:type="limen:TransformedUpDownProcedure" startValue="8.0" floorValue="0.05" ceilingValue="20.0" stepMode="MULTIPLICATIVE" downCount="2" upCount="1" initialStep="2.0" minimumStep="1.189" shrinkFactor="0.5" reversalsPerShrink="2" discardedReversals="2"/>
+                  <stoppingRule maximumReversals="20" maximumTrials="3"/>
+                </tracks>
+              </steps>
+              <steps id="fd-2000-tiny" title="Frequency discrimination 2000 Hz (three trials)">
+                <task xsi:type="limen:ForcedChoiceTask" intervalDurationSeconds="0.2" interTrialIntervalSeconds="0.1" feedback="false" intervalCount="2" interStimulusIntervalSeconds="0.1"/>
+                <stimulus standardFrequencyHz="2000.0" rampDurationSeconds="0.02">
+                  <standardLevel xsi:type="limen:AbsoluteLevel" levelDbSpl="60.0"/>
+                </stimulus>
+                <variedQuantity unit="PERCENT" scale="LOG"/>
+                <tracks name="A">
+                  <procedure xsi:type="limen:TransformedUpDownProcedure" startValue="8.0" floorValue="0.05" ceilingValue="20.0" stepMode="MULTIPLICATIVE" downCount="2" upCount="1" initialStep="2.0" minimumStep="1.189" shrinkFactor="0.5" reversalsPerShrink="2" discardedReversals="2"/>
+                  <stoppingRule maximumReversals="20" maximumTrials="3"/>
+                </tracks>
+              </steps>
+              <breaks afterStepCount="1" minimumDurationSeconds="1.0" message="Time for a short rest."/>
+            </limen:Battery>
+            """;
+
     private DemoLab() {
     }
 
@@ -35,6 +67,7 @@ final class DemoLab {
         Files.createDirectories(workspace);
         Path battery = workspace.resolve(BATTERY);
         Files.writeString(battery, BATTERY_XML.strip() + "\n");
+        Files.writeString(workspace.resolve(TWO_PARTS), TWO_PARTS_XML.strip() + "\n");
         Path root = Paths.get(System.getProperty("limen.root", "../.."));
         Path cal = root.resolve("examples/harbourside-demo.calibration");
         if (!Files.isRegularFile(cal)) {

@@ -323,7 +323,7 @@ public final class OperatorConsolePart {
         if (Files.isDirectory(archive)) {
             try {
                 for (Path p : ArchiveIndex.sessions(archive)) {
-                    if (session != null && session.running() && p.equals(session.folder().path())) {
+                    if (busy() && p.equals(session.folder().path())) {
                         continue;
                     }
                     try {
@@ -489,7 +489,7 @@ public final class OperatorConsolePart {
         if (startButton == null || startButton.isDisposed()) {
             return;
         }
-        boolean busy = session != null && session.running();
+        boolean busy = busy();
         startButton.setEnabled(!busy && acknowledgeCheck.getSelection() && !participantText.getText().isBlank()
                 && batteryCombo.getSelectionIndex() >= 0);
         pauseButton.setEnabled(busy && !session.control().paused());
@@ -497,6 +497,11 @@ public final class OperatorConsolePart {
         abortButton.setEnabled(busy);
         showScreenButton.setEnabled(busy && screen != null);
         resumeSessionButton.setEnabled(!busy && interruptedTable.getSelectionIndex() >= 0);
+    }
+
+    /** Whether a session is under way (its thread may still be closing the output after it has ended). */
+    private boolean busy() {
+        return session != null && lastEnd == null && lastError == null;
     }
 
     /** Sets the session fields (as the operator would); used by scripted checks. */
@@ -688,7 +693,7 @@ public final class OperatorConsolePart {
 
     /** Aborts the running session (after the operator confirms, when asked to). */
     public void abort(boolean confirm) {
-        if (session == null || !session.running()) {
+        if (!busy()) {
             return;
         }
         if (confirm && !MessageDialog.openConfirm(statusLabel.getShell(), "Abort session",
