@@ -137,6 +137,7 @@ public final class LimenFiles {
         resources.getResources().add(resource);
         List<Problem> problems = new ArrayList<>();
         if (bytes.length == 0) {
+            resources.getResources().remove(resource);
             problems.add(Problem.of(ProblemCode.MALFORMED_FILE, "the file is empty", file, 1, 1, null, null));
             return new LoadResult(file, null, null, problems, true);
         }
@@ -158,6 +159,9 @@ public final class LimenFiles {
             problems.addAll(LoadProblems.unknownContent(file, resource));
         }
         problems.sort(LoadProblems.ORDER);
+        if (document == null) {
+            resources.getResources().remove(resource); // no half-read document stays in the caller's set
+        }
         return new LoadResult(file, document, document == null ? null : resource, problems, true);
     }
 
