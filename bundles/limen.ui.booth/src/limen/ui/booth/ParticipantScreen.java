@@ -480,7 +480,7 @@ public final class ParticipantScreen implements Responder {
         b.setBackground(dim);
         b.setForeground(foreground);
         GridData d = new GridData(SWT.FILL, SWT.FILL, true, false);
-        d.widthHint = 220;
+        d.widthHint = Math.max(220, b.computeSize(SWT.DEFAULT, SWT.DEFAULT).x + 60);
         d.heightHint = 120;
         b.setLayoutData(d);
         return b;
