@@ -13,6 +13,7 @@ jar() { local p="$repo/$1"; [ -f "$p" ] || { echo "missing $p: mvn dependency:ge
 cp="$(jar org/apache/commons/commons-math3/3.6.1/commons-math3-3.6.1.jar)"
 cp="$cp:$(jar org/junit/platform/junit-platform-console-standalone/1.12.2/junit-platform-console-standalone-1.12.2.jar)"
 for extra in info/picocli/picocli/4.7.7/picocli-4.7.7.jar org/apache/commons/commons-csv/1.14.1/commons-csv-1.14.1.jar \
+  commons-io/commons-io/2.20.0/commons-io-2.20.0.jar commons-codec/commons-codec/1.19.0/commons-codec-1.19.0.jar \
   org/eclipse/emf/org.eclipse.emf.common/2.46.0/org.eclipse.emf.common-2.46.0.jar \
   org/eclipse/emf/org.eclipse.emf.ecore/2.43.0/org.eclipse.emf.ecore-2.43.0.jar \
   org/eclipse/emf/org.eclipse.emf.ecore.xmi/2.41.0/org.eclipse.emf.ecore.xmi-2.41.0.jar; do
