@@ -9,6 +9,8 @@ public final class AuthoringTopics {
     public static final String STEP = "limen/authoring/step";
     /** A {@link ProblemReport}: an open battery's problems after a change. */
     public static final String PROBLEMS = "limen/authoring/problems";
+    /** Asks the open editors to send their {@link #PROBLEMS} again (payload ignored). */
+    public static final String REPUBLISH = "limen/authoring/republish";
     /** An {@code edit.BatteryDocument} that was closed: views drop what they show of it. */
     public static final String CLOSED = "limen/authoring/closed";
 

@@ -6,6 +6,7 @@ import java.util.Objects;
 import java.util.function.Consumer;
 import java.util.stream.Collectors;
 
+import org.eclipse.emf.common.command.CommandWrapper;
 import org.eclipse.emf.common.util.Enumerator;
 import org.eclipse.emf.ecore.EAttribute;
 import org.eclipse.emf.ecore.EEnum;
@@ -138,6 +139,9 @@ public final class Field {
                 int style = SWT.BORDER | (kind == Kind.TEXT && multiLine() ? SWT.MULTI | SWT.WRAP | SWT.V_SCROLL
                         : SWT.SINGLE);
                 Text text = new Text(grid, style);
+                if (feature.isUnsettable()) {
+                    text.setMessage("not set");
+                }
                 if (kind == Kind.NUMBER || kind == Kind.NUMBER_LIST) {
                     text.addListener(SWT.Verify, e -> {
                         for (char c : e.text.toCharArray()) {
@@ -301,10 +305,12 @@ public final class Field {
                 && (!feature.isUnsettable() || owner.eIsSet(feature))) {
             return false;
         }
-        boolean done = document.execute(SetCommand.create(document.domain(), owner, feature, value));
+        String what = spec.label() + (unset ? " cleared" : " = " + text()
+                + (spec.unit().isEmpty() ? "" : " " + spec.unit()));
+        boolean done = document.execute(new CommandWrapper(what, what,
+                SetCommand.create(document.domain(), owner, feature, value)));
         if (done) {
-            status.accept(spec.label() + (unset ? " cleared" : " set to " + text()
-                    + (spec.unit().isEmpty() ? "" : " " + spec.unit())));
+            status.accept(what);
         }
         return done;
     }

@@ -216,8 +216,10 @@ public final class Charts {
             ValueMarker m = new ValueMarker(estimate, new Color(30, 100, 190), new BasicStroke(1.2f));
             m.setLabel(String.format(Locale.ROOT, "estimate %.4g", estimate));
             m.setLabelFont(SMALL);
-            m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-            m.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+            m.setLabelPaint(new Color(30, 100, 190));
+            m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            m.setLabelAnchor(RectangleAnchor.LEFT);
+            m.setLabelTextAnchor(estimate >= trueValue ? TextAnchor.BOTTOM_LEFT : TextAnchor.TOP_LEFT);
             plot.addRangeMarker(m);
         }
         if (Double.isFinite(trueValue)) {
@@ -225,8 +227,9 @@ public final class Charts {
                     BasicStroke.JOIN_MITER, 1, new float[] {4, 3}, 0));
             m.setLabel(String.format(Locale.ROOT, "listener's true value %.4g", trueValue));
             m.setLabelFont(SMALL);
-            m.setLabelAnchor(RectangleAnchor.BOTTOM_RIGHT);
-            m.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
+            m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            m.setLabelAnchor(RectangleAnchor.RIGHT);
+            m.setLabelTextAnchor(estimate >= trueValue ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);
             plot.addRangeMarker(m);
         }
         return chart;

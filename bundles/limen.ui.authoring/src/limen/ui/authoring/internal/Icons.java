@@ -30,6 +30,7 @@ public final class Icons {
     private Image step;
     private Image track;
     private Image pause;
+    private Image calibration;
 
     public Icons(Display display) {
         this.display = display;
@@ -94,6 +95,16 @@ public final class Icons {
         return pause;
     }
 
+    /** A sine over a baseline (a calibration). */
+    public Image calibration() {
+        if (calibration == null) {
+            calibration = paint(new RGB(150, 50, 110), (x, y) -> x > 1 && x < 15
+                    && (Math.abs(y - (8 - 5 * Math.sin((x - 1) / 14 * 2 * Math.PI))) < 1.1 || (int) y == 14),
+                    null, null);
+        }
+        return calibration;
+    }
+
     private Image paint(RGB color, Shape shape, RGB detailColor, Shape detail) {
         ImageData data = new ImageData(SIZE, SIZE, 24, new PaletteData(0xFF0000, 0xFF00, 0xFF));
         byte[] alpha = new byte[SIZE * SIZE];
@@ -129,6 +140,6 @@ public final class Icons {
             i.dispose();
         }
         made.clear();
-        error = warning = battery = step = track = pause = null;
+        error = warning = battery = step = track = pause = calibration = null;
     }
 }

@@ -15,6 +15,8 @@ import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
 import org.eclipse.e4.ui.di.Persist;
+import org.eclipse.e4.ui.di.UIEventTopic;
+import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.e4.ui.model.application.ui.basic.MPart;
 import org.eclipse.e4.ui.services.EContextService;
 import org.eclipse.e4.ui.workbench.modeling.EPartService;
@@ -84,6 +86,10 @@ public final class BatteryEditorPart {
     @Inject
     @Optional
     EPartService partService;
+
+    @Inject
+    @Optional
+    MApplication app;
 
     private BatteryDocument document;
     private Icons icons;
@@ -222,8 +228,24 @@ public final class BatteryEditorPart {
 
     private void publishStep() {
         Step step = stepOfSelection();
-        if (broker != null && step != null) {
-            broker.send(AuthoringTopics.STEP, new StepFocus(document, step));
+        if (step == null) {
+            return;
+        }
+        StepFocus focus = new StepFocus(document, step);
+        if (app != null) {
+            app.getContext().set(StepFocus.class, focus); // for views created later
+        }
+        if (broker != null) {
+            broker.send(AuthoringTopics.STEP, focus);
+        }
+    }
+
+    /** Sends this battery's problems again (for a battery check view created after the last change). */
+    @Inject
+    @Optional
+    void republish(@UIEventTopic(AuthoringTopics.REPUBLISH) Object why) {
+        if (document != null && broker != null) {
+            broker.send(AuthoringTopics.PROBLEMS, new ProblemReport(document, problems, this::goTo));
         }
     }
 
@@ -425,6 +447,7 @@ public final class BatteryEditorPart {
     public void focus() {
         if (viewer != null) {
             viewer.getControl().setFocus();
+            publishStep(); // the views follow the editor brought to the front
         }
     }
 
@@ -432,6 +455,10 @@ public final class BatteryEditorPart {
     public void dispose() {
         if (document != null) {
             document.commandStack().removeCommandStackListener(stackListener);
+            StepFocus shown = app == null ? null : app.getContext().get(StepFocus.class);
+            if (shown != null && shown.document() == document) {
+                app.getContext().remove(StepFocus.class);
+            }
             if (broker != null) {
                 broker.send(AuthoringTopics.CLOSED, document);
             }

@@ -19,6 +19,7 @@ import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
 import org.eclipse.e4.ui.di.UIEventTopic;
+import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.TableViewer;
@@ -67,7 +68,7 @@ public final class DesignSimulationPart {
     private StepFocus focus;
     private Label title;
     private Text listener;
-    private Label listenerHint;
+    private String listenerDefaults;
     private Text runs;
     private Text seed;
     private Text cap;
@@ -92,49 +93,48 @@ public final class DesignSimulationPart {
     private final List<String> progressSeen = new ArrayList<>();
 
     @PostConstruct
-    public void create(Composite parent) {
+    public void create(Composite parent, @Optional MApplication app) {
         parent.setLayout(new GridLayout(1, false));
         title = new Label(parent, SWT.WRAP);
         title.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         Composite row1 = new Composite(parent, SWT.NONE);
-        row1.setLayout(new GridLayout(2, false));
+        row1.setLayout(new GridLayout(12, false));
         row1.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        new Label(row1, SWT.NONE).setText("Model listener");
+        new Label(row1, SWT.NONE).setText("Listener");
         listener = new Text(row1, SWT.BORDER);
-        listener.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        GridData listenerData = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        listenerData.minimumWidth = 180;
+        listener.setLayoutData(listenerData);
         listener.setMessage("e.g. logistic:mid=0.3,scale=0.08 (empty: each track's default)");
-        listener.setToolTipText("logistic:mid=M,scale=S | normal:mid=M,sd=S | weibull:alpha=A,beta=B | "
-                + "gumbel:mid=M,scale=S, optionally ,lapse=L; values in the step's quantity unit; the guess rate "
-                + "comes from the task");
-        new Label(row1, SWT.NONE);
-        listenerHint = new Label(row1, SWT.WRAP);
-        listenerHint.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        Composite row2 = new Composite(parent, SWT.NONE);
-        row2.setLayout(new GridLayout(13, false));
-        row2.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        runs = field(row2, "Runs", "200", 50);
-        seed = field(row2, "Seed", "1", 60);
-        cap = field(row2, "Trial cap", "2000", 50);
-        falseAlarms = field(row2, "False-alarm rate", "0", 40);
-        falseAlarms.setToolTipText("The listener's yes rate on catch trials (yes/no tasks)");
-        run = new Button(row2, SWT.PUSH);
+        listenerDefaults = "";
+        runs = field(row1, "Runs", "200", 45);
+        seed = field(row1, "Seed", "1", 45);
+        cap = field(row1, "Trial cap", "2000", 45);
+        falseAlarms = field(row1, "False alarms", "0", 35);
+        falseAlarms.setToolTipText("The listener's yes rate on catch trials (yes/no tasks), in [0, 1)");
+        run = new Button(row1, SWT.PUSH);
         run.setText("Run");
         run.addListener(SWT.Selection, e -> start());
-        cancel = new Button(row2, SWT.PUSH);
+        cancel = new Button(row1, SWT.PUSH);
         cancel.setText("Cancel");
         cancel.setEnabled(false);
         cancel.addListener(SWT.Selection, e -> cancel());
+        Composite row2 = new Composite(parent, SWT.NONE);
+        row2.setLayout(new GridLayout(4, false));
+        row2.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         progress = new ProgressBar(row2, SWT.SMOOTH);
         progress.setLayoutData(new GridData(160, SWT.DEFAULT));
         progressText = new Label(row2, SWT.NONE);
         progressText.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        new Label(row2, SWT.NONE).setText("Example track");
+        exampleTrack = new Combo(row2, SWT.READ_ONLY);
+        exampleTrack.addListener(SWT.Selection, e -> showExample());
 
-        table = new TableViewer(parent, SWT.BORDER | SWT.FULL_SELECTION);
+        SashForm results = new SashForm(parent, SWT.VERTICAL);
+        results.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        table = new TableViewer(results, SWT.BORDER | SWT.FULL_SELECTION);
         table.getTable().setHeaderVisible(true);
         table.getTable().setLinesVisible(true);
-        GridData tableData = new GridData(SWT.FILL, SWT.TOP, true, false);
-        tableData.heightHint = 70;
-        table.getTable().setLayoutData(tableData);
         column("Track", 60, TrackSummary::track);
         column("Target", 120, s -> String.valueOf(s.target()));
         column("True value", 80, s -> num(s.trueValue()));
@@ -147,19 +147,14 @@ public final class DesignSimulationPart {
         column("Capped", 55, s -> Integer.toString(s.capped()));
         table.setContentProvider(ArrayContentProvider.getInstance());
 
-        Composite exampleRow = new Composite(parent, SWT.NONE);
-        exampleRow.setLayout(new GridLayout(2, false));
-        new Label(exampleRow, SWT.NONE).setText("Example track");
-        exampleTrack = new Combo(exampleRow, SWT.READ_ONLY);
-        exampleTrack.addListener(SWT.Selection, e -> showExample());
-        SashForm charts = new SashForm(parent, SWT.HORIZONTAL);
-        charts.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        SashForm charts = new SashForm(results, SWT.HORIZONTAL);
         estimates = new ChartCanvas(charts);
         trials = new ChartCanvas(charts);
         example = new ChartCanvas(charts);
         estimates.setPlaceholder("Run a simulation to see the distribution of estimates.");
         charts.setWeights(33, 30, 37);
-        show(null);
+        results.setWeights(28, 72);
+        show(app == null ? null : app.getContext().get(StepFocus.class)); // the step chosen before this view opened
     }
 
     private static Text field(Composite row, String label, String value, int width) {
@@ -199,13 +194,31 @@ public final class DesignSimulationPart {
         }
         focus = newFocus;
         Step step = focus == null ? null : focus.step();
+        if (job == null && result != null && step != lastStep) {
+            clearResults(); // results of another step would read as this one's
+        }
         title.setText(step == null ? "No step selected: select a step or track in a battery editor."
                 : "Step " + step.getId() + " (" + step.getTitle() + ") of " + focus.document().name()
                         + ": values in " + Units.quantity(step));
-        listenerHint.setText(step == null ? "" : defaultsText(step));
-        listenerHint.getParent().layout(true);
+        listenerDefaults = step == null ? "" : defaultsText(step);
+        listener.setMessage(step == null ? "e.g. logistic:mid=0.3,scale=0.08"
+                : "empty: each track's default (" + listenerDefaults + ")");
+        listener.setToolTipText("Model listener for every track: logistic:mid=M,scale=S | normal:mid=M,sd=S | "
+                + "weibull:alpha=A,beta=B | gumbel:mid=M,scale=S, optionally ,lapse=L; values in the step's "
+                + "quantity unit; the guess rate comes from the task. Empty: " + listenerDefaults);
         run.setEnabled(step != null && job == null);
         title.getParent().layout(true, true);
+    }
+
+    private void clearResults() {
+        result = null;
+        table.setInput(List.of());
+        estimates.setChart(null);
+        trials.setChart(null);
+        example.setChart(null);
+        exampleTrack.setItems();
+        progress.setSelection(0);
+        progressText.setText("");
     }
 
     private String defaultsText(Step step) {
@@ -218,7 +231,7 @@ public final class DesignSimulationPart {
         } catch (IllegalArgumentException e) {
             return "cannot simulate: " + e.getMessage();
         }
-        return "defaults " + String.join("; ", parts);
+        return String.join("; ", parts);
     }
 
     /** Forgets a closed battery. */
@@ -282,7 +295,7 @@ public final class DesignSimulationPart {
         progressDone = 0;
         progress.setMaximum(settings.runs());
         progress.setSelection(0);
-        progressText.setText("0/" + settings.runs() + " runs");
+        progressText.setText("0/" + settings.runs() + " runs of step " + step.getId());
         run.setEnabled(false);
         cancel.setEnabled(true);
         job = Job.create("Design simulation of step " + step.getId(), (IProgressMonitor monitor) -> {
@@ -324,7 +337,7 @@ public final class DesignSimulationPart {
         }
         progressSeen.add(done + "/" + total);
         progress.setSelection(done);
-        progressText.setText(done + "/" + total + " runs");
+        progressText.setText(done + "/" + total + " runs of step " + lastStep.getId());
     }
 
     private void failed(RuntimeException e) {
@@ -345,8 +358,8 @@ public final class DesignSimulationPart {
         }
         progress.setSelection(r.cancelled() ? progressDone : progress.getMaximum());
         long completed = r.rows().stream().mapToInt(RunRow::run).distinct().count();
-        progressText.setText((r.cancelled() ? "Cancelled after " : "Done: ") + completed + " runs, seed "
-                + r.masterSeed());
+        progressText.setText((r.cancelled() ? "Cancelled after " : "Done: ") + completed + " runs of step "
+                + lastStep.getId() + ", seed " + r.masterSeed());
         run.setEnabled(focus != null);
         cancel.setEnabled(false);
         table.setInput(r.summaries());

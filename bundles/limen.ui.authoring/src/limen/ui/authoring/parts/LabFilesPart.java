@@ -103,7 +103,7 @@ public final class LabFilesPart {
             @Override
             public Image getImage(Object element) {
                 return Files.isDirectory((Path) element) ? null
-                        : element.toString().endsWith(".battery") ? icons.battery() : icons.track();
+                        : element.toString().endsWith(".battery") ? icons.battery() : icons.calibration();
             }
         });
         viewer.addDoubleClickListener(e -> openSelected());

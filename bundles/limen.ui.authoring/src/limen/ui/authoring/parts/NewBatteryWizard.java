@@ -98,8 +98,10 @@ public final class NewBatteryWizard extends Wizard {
             title.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
             list.addSelectionChangedListener(e -> {
                 Template t = template();
-                if (t != null && title.getText().isBlank()) {
-                    title.setText(t.title());
+                boolean untouched = title.getText().isBlank()
+                        || templates.stream().anyMatch(x -> x.title().equals(title.getText()));
+                if (t != null && untouched) {
+                    title.setText(t.title()); // follow the template until the author types a title
                 }
                 check();
             });

@@ -11,6 +11,7 @@ import jakarta.annotation.PreDestroy;
 import jakarta.inject.Inject;
 
 import org.eclipse.e4.core.di.annotations.Optional;
+import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
 import org.eclipse.e4.ui.di.UIEventTopic;
 import org.eclipse.jface.viewers.ArrayContentProvider;
@@ -43,6 +44,10 @@ public final class ProblemsPart {
     /** One row: a problem of one open battery. */
     public record Row(ProblemReport report, Problem problem) {
     }
+
+    @Inject
+    @Optional
+    IEventBroker broker;
 
     private final Map<BatteryDocument, ProblemReport> reports = new LinkedHashMap<>();
     private TableViewer viewer;
@@ -79,6 +84,9 @@ public final class ProblemsPart {
             }
         });
         refresh();
+        if (broker != null) {
+            broker.send(AuthoringTopics.REPUBLISH, "battery check opened");
+        }
     }
 
     private void column(String title, int width, Function<Row, String> text, Function<Row, Image> image) {

@@ -17,10 +17,12 @@ import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
 import org.eclipse.e4.ui.di.UIEventTopic;
+import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.emf.common.command.CommandStackListener;
 import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.custom.ScrolledComposite;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
@@ -79,6 +81,8 @@ public final class StimulusPreviewPart {
     private Button play;
     private Label playReason;
     private Label levels;
+    private ScrolledComposite infoScroller;
+    private Composite info;
     private ChartCanvas waveform;
     private ChartCanvas spectrum;
     private TrialPreview.Result result;
@@ -88,20 +92,21 @@ public final class StimulusPreviewPart {
     private long seed = 1;
 
     @PostConstruct
-    public void create(Composite parent) {
+    public void create(Composite parent, @Optional MApplication app) {
         parent.setLayout(new GridLayout(1, false));
         title = new Label(parent, SWT.WRAP);
         title.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         Composite row = new Composite(parent, SWT.NONE);
         row.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        row.setLayout(new GridLayout(12, false));
+        row.setLayout(new GridLayout(7, false));
         new Label(row, SWT.NONE).setText("Calibration");
         calibrationChoice = new Combo(row, SWT.READ_ONLY);
-        calibrationChoice.setLayoutData(new GridData(220, SWT.DEFAULT));
+        calibrationChoice.setLayoutData(new GridData(260, SWT.DEFAULT));
         calibrationChoice.addListener(SWT.Selection, e -> calibrationChosen(parent));
         new Label(row, SWT.NONE).setText("Value");
         valueText = new Text(row, SWT.BORDER);
         valueText.setLayoutData(new GridData(70, SWT.DEFAULT));
+        valueText.setToolTipText("The varied quantity's value of the previewed trial (Enter to render)");
         valueText.addListener(SWT.DefaultSelection, e -> render());
         valueText.addListener(SWT.FocusOut, e -> render());
         valueUnit = new Label(row, SWT.NONE);
@@ -109,48 +114,59 @@ public final class StimulusPreviewPart {
         new Label(row, SWT.NONE).setText("Target in interval");
         targetChoice = new Combo(row, SWT.READ_ONLY);
         targetChoice.addListener(SWT.Selection, e -> render());
-        referenceLabel = new Label(row, SWT.NONE);
-        referenceLabel.setText("Assumed threshold");
-        referenceText = new Text(row, SWT.BORDER);
+        Composite row2 = new Composite(parent, SWT.NONE);
+        row2.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        row2.setLayout(new GridLayout(6, false));
+        referenceLabel = new Label(row2, SWT.NONE);
+        referenceLabel.setText("Assumed threshold (dB SPL)");
+        referenceText = new Text(row2, SWT.BORDER);
         referenceText.setLayoutData(new GridData(50, SWT.DEFAULT));
         referenceText.setText("30");
         referenceText.setToolTipText("The standard level is relative to an earlier step's threshold: the preview "
                 + "assumes this threshold, dB SPL");
         referenceText.addListener(SWT.DefaultSelection, e -> render());
-        Button again = new Button(row, SWT.PUSH);
+        Button again = new Button(row2, SWT.PUSH);
         again.setText("New noise");
         again.setToolTipText("Render again with fresh randomness (noise maskers)");
         again.addListener(SWT.Selection, e -> {
             seed++;
             render();
         });
-        play = new Button(row, SWT.PUSH);
+        play = new Button(row2, SWT.PUSH);
         play.setText("Play");
         play.addListener(SWT.Selection, e -> play(parent));
-        playReason = new Label(row, SWT.WRAP);
+        playReason = new Label(row2, SWT.WRAP);
         playReason.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        levels = new Label(parent, SWT.WRAP);
-        GridData levelData = new GridData(SWT.FILL, SWT.TOP, true, false);
-        levelData.heightHint = 48;
-        levels.setLayoutData(levelData);
-        Label caution = new Label(parent, SWT.WRAP);
-        caution.setText("Caution: " + About.RESEARCH_CAUTION);
-        GridData cautionData = new GridData(SWT.FILL, SWT.TOP, true, false);
-        cautionData.widthHint = 600;
-        caution.setLayoutData(cautionData);
-        caution.setForeground(parent.getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
+        showReference(false);
         SashForm charts = new SashForm(parent, SWT.HORIZONTAL);
         charts.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        ScrolledComposite infoScroller = new ScrolledComposite(charts, SWT.V_SCROLL);
+        infoScroller.setExpandHorizontal(true);
+        infoScroller.setExpandVertical(true);
+        Composite info = new Composite(infoScroller, SWT.NONE);
+        info.setLayout(new GridLayout(1, false));
+        infoScroller.setContent(info);
+        levels = new Label(info, SWT.WRAP);
+        levels.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        Label caution = new Label(info, SWT.WRAP);
+        caution.setText("Caution: " + About.RESEARCH_CAUTION);
+        GridData cautionData = new GridData(SWT.FILL, SWT.TOP, true, false);
+        cautionData.verticalIndent = 8;
+        caution.setLayoutData(cautionData);
+        caution.setForeground(parent.getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
+        infoScroller.addListener(SWT.Resize, e -> fitInfo(infoScroller, info));
+        this.infoScroller = infoScroller;
+        this.info = info;
         waveform = new ChartCanvas(charts);
         spectrum = new ChartCanvas(charts);
         waveform.setPlaceholder("Select a step in a battery editor to preview one of its trials.");
-        charts.setWeights(55, 45);
+        charts.setWeights(22, 42, 36);
         try {
             deviceProblem = Devices.system().outputs().isEmpty() ? Devices.NO_OUTPUT_MESSAGE : null;
         } catch (RuntimeException | LinkageError e) {
             deviceProblem = "no sound device available (" + e + ")";
         }
-        show(null);
+        show(app == null ? null : app.getContext().get(StepFocus.class)); // the step chosen before this view opened
     }
 
     /** Previews the step the author works on. */
@@ -185,11 +201,25 @@ public final class StimulusPreviewPart {
                 .toArray(String[]::new));
         targetChoice.select(n - 1); // the target last: the standard comes first, as listeners are told
         targetChoice.setEnabled(n > 1);
-        boolean relative = TrialPreview.referenceOf(step) != null;
-        referenceLabel.setVisible(relative);
-        referenceText.setVisible(relative);
+        showReference(TrialPreview.referenceOf(step) != null);
         fillCalibrations();
         render();
+    }
+
+    private static void fitInfo(ScrolledComposite scroller, Composite content) {
+        int width = Math.max(120, scroller.getClientArea().width);
+        scroller.setMinSize(content.computeSize(width, SWT.DEFAULT));
+        content.layout(true);
+    }
+
+    private void showReference(boolean relative) {
+        for (org.eclipse.swt.widgets.Control c : new org.eclipse.swt.widgets.Control[] {referenceLabel, referenceText}) {
+            c.setVisible(relative);
+            GridData d = c.getLayoutData() instanceof GridData g ? g : new GridData();
+            d.exclude = !relative;
+            c.setLayoutData(d);
+        }
+        referenceLabel.getParent().layout(true);
     }
 
     /** Forgets a closed battery. */
@@ -331,6 +361,7 @@ public final class StimulusPreviewPart {
         play.setToolTipText(reason == null ? "Play this checked trial on the default sound device" : reason);
         playReason.setText(reason == null ? "" : reason);
         title.getParent().layout(true, true);
+        fitInfo(infoScroller, info);
     }
 
     private static String levelText(TrialPreview.Result r) {
