@@ -163,6 +163,38 @@ class StimulusPreviewTest {
     }
 
     @Test
+    void previewEqualsTheHeadlessRenderCommand() throws Exception {
+        Step step = editor.document().battery().getSteps().get(2); // fd-4000
+        editor.select(step);
+        preview.preview(5.0, 1);
+        TrialPreview.Result r = preview.result();
+        assertNotNull(r.checked());
+        Path wav = temp.resolve("fd-4000.wav");
+        java.io.StringWriter out = new java.io.StringWriter();
+        java.io.StringWriter err = new java.io.StringWriter();
+        int code = limen.cli.LimenCli.execute(new java.io.PrintWriter(out), new java.io.PrintWriter(err), "render",
+                fx.workspace.resolve("frequency-discrimination.battery").toString(), "--step", "fd-4000", "--value",
+                "5", "--target-interval", "1", "--bits", "24", "--out", wav.toString());
+        assertEquals(0, code, err.toString());
+        limen.signal.WavData data = limen.signal.WavFiles.read(wav);
+        assertEquals(r.stimulus().length(), data.length(), "same layout: lead-in, intervals, ISI, trail");
+        double lsb = Math.pow(2, -23); // 24-bit samples: the WAV differs from the preview by at most half a step
+        for (int c = 0; c < 2; c++) {
+            double[] mine = r.stimulus().channel(c);
+            double[] theirs = data.channel(c);
+            for (int n = 0; n < mine.length; n++) {
+                if (Math.abs(mine[n] - theirs[n]) > lsb) {
+                    throw new AssertionError("channel " + c + " sample " + n + ": preview " + mine[n] + ", render "
+                            + theirs[n]);
+                }
+            }
+        }
+        assertTrue(r.intervals().get(0).target());
+        assertEquals(4000 * 1.05, r.intervals().get(0).dominantFrequencyHz(), 0.05, "target first: 4200 Hz");
+        assertEquals(4000, r.intervals().get(1).dominantFrequencyHz(), 0.05);
+    }
+
+    @Test
     void guardRefusesAboveTheCeilingAndPlayIsOff() throws Exception {
         Step step = editor.document().battery().getSteps().get(0);
         editor.select(step);
