@@ -93,7 +93,7 @@ final class AudioTestEnvironment {
             }
         }
 
-        String transcript() {
+        String childOutput() {
             synchronized (all) {
                 return String.join("\n", all);
             }

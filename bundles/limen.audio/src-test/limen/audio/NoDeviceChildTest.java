@@ -29,10 +29,10 @@ class NoDeviceChildTest {
         AudioTestEnvironment.Child child = new AudioTestEnvironment.Child("none",
                 Map.of("XDG_RUNTIME_DIR", dir.toString(), "PULSE_SERVER", "unix:" + dir.resolve("no-server")),
                 List.of("LIMEN_TEST_AUDIO"));
-        assertTrue(child.process.waitFor(60, TimeUnit.SECONDS), child.transcript());
+        assertTrue(child.process.waitFor(60, TimeUnit.SECONDS), child.childOutput());
         Thread.sleep(100); // let the reader take the last lines
-        assertEquals(5, child.process.exitValue(), child.transcript());
-        String out = child.transcript();
+        assertEquals(5, child.process.exitValue(), child.childOutput());
+        String out = child.childOutput();
         assertTrue(out.contains("OUTPUTS 0"), out);
         assertTrue(out.contains("NO_DEVICE no audio output device: playback unavailable, render to WAV instead"), out);
     }

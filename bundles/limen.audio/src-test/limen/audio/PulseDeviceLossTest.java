@@ -51,17 +51,17 @@ class PulseDeviceLossTest {
             child = new AudioTestEnvironment.Child("lose",
                     Map.of("XDG_RUNTIME_DIR", runtime.toString(), "PULSE_SERVER", "unix:" + socket), List.of());
             String open = child.await("OPEN", 30_000);
-            assertNotNull(open, "child did not open the output: " + child.transcript());
-            assertNotNull(child.await("PLAYING 1", 30_000), child.transcript());
+            assertNotNull(open, "child did not open the output: " + child.childOutput());
+            assertNotNull(child.await("PLAYING 1", 30_000), child.childOutput());
             Thread.sleep(700); // well inside the second 2-second trial
             daemon.destroyForcibly();
             assertTrue(daemon.waitFor(10, TimeUnit.SECONDS));
             if (!child.process.waitFor(30, TimeUnit.SECONDS)) {
                 child.process.destroyForcibly();
-                fail("child still playing 30 s after the sound server was killed: " + child.transcript());
+                fail("child still playing 30 s after the sound server was killed: " + child.childOutput());
             }
-            assertEquals(3, child.process.exitValue(), child.transcript());
-            String lost = child.transcript();
+            assertEquals(3, child.process.exitValue(), child.childOutput());
+            String lost = child.childOutput();
             assertTrue(lost.contains("LOST audio device lost on 'default [default]'"), lost);
             assertTrue(lost.contains("the trial was not fully played"), lost);
             System.out.println("device loss in the child: " + lost.lines().filter(l -> l.startsWith("LOST")).findFirst().orElse(""));
