@@ -80,7 +80,7 @@ public final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--listener", paramLabel = "SPEC", description = {"Model listener answering the trials, for all "
             + "steps (e.g. logistic:mid=0.3,scale=0.08) or one step (STEP_ID=SPEC); repeatable.",
-            "Steps without a spec get a default listener by stimulus kind."})
+            "Steps without a spec get the same default listener as ./limen simulate."})
     List<String> listeners;
 
     @Option(names = "--realtime", description = "Make the none and wav outputs take as long as the sound would, "
