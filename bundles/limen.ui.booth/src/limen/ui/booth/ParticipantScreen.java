@@ -7,6 +7,7 @@ import java.util.concurrent.LinkedBlockingQueue;
 import java.util.concurrent.TimeUnit;
 import java.util.function.Supplier;
 
+import org.eclipse.e4.ui.bindings.keys.KeyBindingDispatcher;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.graphics.Font;
@@ -40,9 +41,10 @@ import limen.signal.IntervalMark;
  * buttons (or number keys), feedback, progress, break and end screens. Nothing else is reachable from it: it has
  * no trim and no menus, refuses to close, turns off traversal (Esc, Tab), swallows every key before its widgets
  * see it, and is left only by the operator gesture {@link #EXIT_CHORD_MASK} + Q followed by the lab's PIN. (The
- * key filter is a display filter added when the screen opens; a filter added earlier, such as the workbench's
- * key-binding dispatcher, still runs before it: that case is not covered by the tests, which run without the
- * workbench.)
+ * key filter is a display filter added when the screen opens; display filters run in the order they were
+ * added, so the workbench's key-binding filter, added at start-up, would see keys first: the console hands it to
+ * {@link #holdWorkbenchKeys}, which turns it off while the screen is shown and on again when the operator leaves
+ * or the screen closes.)
  * <p>
  * Timing: {@link #soundStarting} (called by {@link IndicatedOutput} just before {@code play}) fixes
  * {@code t0}; interval i is lit from {@code t0 + onset_i / fs} to {@code t0 + offset_i / fs}, taken from the
@@ -85,6 +87,8 @@ public final class ParticipantScreen implements Responder {
     private final Listener keyFilter = this::filterKey;
     private final Listener traverseFilter = this::filterTraverse;
     private final BlockingQueue<Response> answers = new LinkedBlockingQueue<>();
+    private KeyBindingDispatcher.KeyDownFilter workbenchKeys;
+    private boolean workbenchKeysHeld;
 
     private volatile boolean stopped;
     private volatile boolean forcedChoice = true;
@@ -174,6 +178,7 @@ public final class ParticipantScreen implements Responder {
         display.addFilter(SWT.KeyDown, keyFilter);
         display.addFilter(SWT.Traverse, traverseFilter);
         shell.addListener(SWT.Dispose, e -> {
+            releaseWorkbenchKeys();
             display.removeFilter(SWT.KeyDown, keyFilter);
             display.removeFilter(SWT.Traverse, traverseFilter);
             for (org.eclipse.swt.graphics.Resource r : new org.eclipse.swt.graphics.Resource[] {background,
@@ -243,7 +248,43 @@ public final class ParticipantScreen implements Responder {
     /** Shows the screen again after the operator left it. */
     public void showAgain() {
         shell.setVisible(true);
+        holdWorkbenchKeysNow();
         shell.forceActive();
+    }
+
+    /**
+     * Keeps the workbench's key bindings away from the participant: the given filter (the workbench's
+     * key-binding dispatcher, registered on the display before this screen existed, so it would see every key
+     * first) is disabled while the screen is shown and enabled again when the operator leaves with the PIN or the
+     * screen closes. A filter that was already disabled is left as it was. Display thread.
+     *
+     * @param filter the workbench's key filter, or null when there is no workbench (nothing to hold)
+     */
+    public void holdWorkbenchKeys(KeyBindingDispatcher.KeyDownFilter filter) {
+        releaseWorkbenchKeys();
+        workbenchKeys = filter;
+        if (shell.isVisible()) {
+            holdWorkbenchKeysNow();
+        }
+    }
+
+    /** Whether this screen has the workbench's key bindings switched off now. */
+    public boolean holdsWorkbenchKeys() {
+        return workbenchKeysHeld;
+    }
+
+    private void holdWorkbenchKeysNow() {
+        if (workbenchKeys != null && !workbenchKeysHeld && workbenchKeys.isEnabled()) {
+            workbenchKeys.setEnabled(false);
+            workbenchKeysHeld = true;
+        }
+    }
+
+    private void releaseWorkbenchKeys() {
+        if (workbenchKeysHeld) {
+            workbenchKeys.setEnabled(true);
+            workbenchKeysHeld = false;
+        }
     }
 
     /** Closes the screen for good (the console does this when the session has ended). */
@@ -651,6 +692,7 @@ public final class ParticipantScreen implements Responder {
         }
         hidePinPrompt();
         shell.setVisible(false);
+        releaseWorkbenchKeys();
         operatorLeft.run();
         return true;
     }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.lang.reflect.Proxy;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -17,6 +18,8 @@ import java.util.function.BooleanSupplier;
 import org.eclipse.e4.core.contexts.ContextInjectionFactory;
 import org.eclipse.e4.core.contexts.EclipseContextFactory;
 import org.eclipse.e4.core.contexts.IEclipseContext;
+import org.eclipse.e4.ui.bindings.EBindingService;
+import org.eclipse.e4.ui.bindings.keys.KeyBindingDispatcher;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Composite;
@@ -316,6 +319,121 @@ class BoothTest {
         } finally {
             ps.dispose();
         }
+    }
+
+    /**
+     * The workbench registers its key-binding dispatcher as a display filter at start-up, before any participant
+     * screen exists, so it sees keys first. Here a real {@link KeyBindingDispatcher}, made by injection like the
+     * workbench makes it and registered the same way (KeyDown and Traverse filters), stands in for the workbench; its
+     * binding service counts every lookup. While the screen shows, no key may reach it; after the operator leaves
+     * with the PIN it works again.
+     */
+    @Test
+    void workbenchKeyBindingsDoNotReachTheParticipantScreen() throws Exception {
+        AtomicInteger lookups = new AtomicInteger();
+        IEclipseContext workbench = EclipseContextFactory.create("workbench-stand-in");
+        workbench.set(EBindingService.class, (EBindingService) Proxy.newProxyInstance(getClass().getClassLoader(),
+                new Class<?>[] { EBindingService.class }, (proxy, method, args) -> {
+                    lookups.incrementAndGet();
+                    return nothing(method.getReturnType());
+                }));
+        KeyBindingDispatcher dispatcher = ContextInjectionFactory.make(KeyBindingDispatcher.class, workbench);
+        KeyBindingDispatcher.KeyDownFilter filter = dispatcher.getKeyDownFilter();
+        display.addFilter(SWT.KeyDown, filter);
+        display.addFilter(SWT.Traverse, filter);
+        AtomicBoolean left = new AtomicBoolean();
+        ParticipantScreen ps = null;
+        try {
+            shell.open();
+            shell.forceActive();
+            pump(100);
+            typeWithModifiers('w', (char) 23, SWT.CTRL);
+            pumpUntil(() -> lookups.get() > 0, 3000, "the stand-in dispatcher to see a key (else this test proves nothing)");
+
+            ps = new ParticipantScreen(display, display.getPrimaryMonitor(), () -> "2468", () -> left.set(true));
+            ps.holdWorkbenchKeys(filter);
+            assertTrue(ps.holdsWorkbenchKeys());
+            assertFalse(filter.isEnabled(), "the workbench's key filter is still on under the participant screen");
+            pump(200);
+            ps.shell().forceActive();
+            pump(100);
+            lookups.set(0);
+            typeWithModifiers('w', (char) 23, SWT.CTRL);
+            typeWithModifiers('q', (char) 17, SWT.CTRL);
+            typeWithModifiers(SWT.F4, '\0', SWT.ALT);
+            typeKey('1');
+            typeKey((char) SWT.ESC);
+            pump(300);
+            assertEquals(0, lookups.get(), "keys typed on the participant screen reached the workbench's bindings");
+            assertTrue(ps.shell().isVisible());
+
+            typeWithModifiers('q', 'Q', SWT.CTRL, SWT.ALT, SWT.SHIFT);
+            pumpUntil(ps::pinPromptVisible, 3000, "the PIN prompt after the operator chord");
+            for (char c : "2468".toCharArray()) {
+                typeKey(c);
+            }
+            typeKey('\r');
+            pumpUntil(left::get, 3000, "leaving with the right PIN");
+            assertTrue(filter.isEnabled(), "the workbench's keys stay off after the operator left");
+            assertEquals(0, lookups.get(), "the PIN reached the workbench's bindings");
+
+            ps.showAgain();
+            assertFalse(filter.isEnabled(), "shown again, the screen must hold the workbench's keys again");
+            ps.dispose();
+            ps = null;
+            assertTrue(filter.isEnabled(), "closing the screen must give the workbench its keys back");
+            shell.forceActive();
+            pump(100);
+            typeWithModifiers('w', (char) 23, SWT.CTRL);
+            pumpUntil(() -> lookups.get() > 0, 3000, "the workbench's bindings to work again after the screen closed");
+        } finally {
+            if (ps != null) {
+                ps.dispose();
+            }
+            display.removeFilter(SWT.KeyDown, filter);
+            display.removeFilter(SWT.Traverse, filter);
+        }
+    }
+
+    /** The console passes the workbench's dispatcher (found in its context) to the participant screen. */
+    @Test
+    void consoleHoldsTheWorkbenchKeysWhileASessionRuns() throws Exception {
+        IEclipseContext workbench = EclipseContextFactory.create("workbench-stand-in");
+        KeyBindingDispatcher dispatcher = ContextInjectionFactory.make(KeyBindingDispatcher.class, workbench);
+        context = workbench.createChild("booth-test");
+        context.set(KeyBindingDispatcher.class, dispatcher);
+        Composite host = new Composite(shell, SWT.NONE);
+        context.set(Composite.class, host);
+        OperatorConsolePart part = ContextInjectionFactory.make(OperatorConsolePart.class, context);
+        shell.open();
+        part.choose(DemoLab.BATTERY, "P-HERON", BoothSession.OutputKind.NONE, false);
+        part.acknowledge();
+        part.start();
+        assertNotNull(part.session(), part.status());
+        assertFalse(dispatcher.getKeyDownFilter().isEnabled(), "a running session left the workbench's keys on");
+        part.screen().stop();
+        pumpUntil(() -> part.lastEnd() != null, 30_000, "the stopped session to end");
+        part.screen().dispose();
+        assertTrue(dispatcher.getKeyDownFilter().isEnabled(), "the workbench's keys stay off after the session");
+    }
+
+    private static Object nothing(Class<?> type) {
+        if (type == boolean.class) {
+            return false;
+        }
+        if (type == int.class) {
+            return 0;
+        }
+        if (type == java.util.Collection.class || type == java.util.List.class) {
+            return java.util.List.of();
+        }
+        if (type == java.util.Map.class) {
+            return java.util.Map.of();
+        }
+        if (type == java.util.Set.class) {
+            return java.util.Set.of();
+        }
+        return null;
     }
 
     /** The demo output, losing the device at a given play. */

@@ -15,6 +15,10 @@ import java.util.stream.Stream;
 
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
+import jakarta.inject.Inject;
+
+import org.eclipse.e4.core.di.annotations.Optional;
+import org.eclipse.e4.ui.bindings.keys.KeyBindingDispatcher;
 
 import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.swt.SWT;
@@ -95,6 +99,10 @@ public final class OperatorConsolePart {
     private SessionStatusInfo lastEnd;
     private String lastError;
     private int preflightRun;
+    /** The workbench's key-binding dispatcher (none outside the workbench): held off while the participant screen shows. */
+    @Inject
+    @Optional
+    private KeyBindingDispatcher keyBindings;
 
     @PostConstruct
     public void create(Composite parent) {
@@ -584,6 +592,7 @@ public final class OperatorConsolePart {
         Monitor[] ms = display.getMonitors();
         Monitor m = ms[Math.max(0, Math.min(monitorCombo.getSelectionIndex(), ms.length - 1))];
         ParticipantScreen s = new ParticipantScreen(display, m, this::exitPin, this::operatorLeftScreen);
+        s.holdWorkbenchKeys(keyBindings == null ? null : keyBindings.getKeyDownFilter());
         screen = s;
         session = BoothSession.launch(folder, output, s, s::soundStarting, realtime, listener(),
                 info -> display.asyncExec(() -> ended(info)),
