@@ -26,7 +26,9 @@ import limen.psychometric.PsychometricFunction;
  * replicates of the same size is simulated for it.</li>
  * </ul>
  * Replicate b uses a generator seeded by {@link Seeds#derive}(seed, stream, b), so results do not depend on
- * the number of threads. Refits start from the grid and from the original estimate.
+ * the number of threads. Refits climb from the original estimate alone and fall back to the full search
+ * (grid and original estimate as starts) when that warm start does not end at a clean interior optimum
+ * ({@code PsychometricFitter.refit}, package-private).
  */
 public final class Bootstrap {
 
@@ -65,9 +67,11 @@ public final class Bootstrap {
         double[] slopes = new double[b];
         double[] deviances = options.goodnessOfFit() ? new double[b] : null;
         PsychometricFunction generating = fit.function();
+        // replicates keep the values and trials of the data: they share the start grid's log terms
+        PsychometricFitter.GridCache grid = fitter.gridCache(data);
         runner.run(b, i -> {
             BinomialData replicate = simulate(data, generating, options.nonparametric(), Seeds.derive(options.seed(), STREAM_REPLICATES, i));
-            FitResult r = fitter.fit(replicate, generating);
+            FitResult r = fitter.refit(replicate, generating, grid);
             boolean usable = !allOneProportion(replicate);
             thresholds[i] = usable ? r.threshold() : Double.NaN;
             slopes[i] = usable ? r.slope() : Double.NaN;
@@ -78,13 +82,13 @@ public final class Bootstrap {
         if (separateGof) {
             runner.run(b, i -> {
                 BinomialData replicate = simulate(data, generating, false, Seeds.derive(options.seed(), STREAM_GOODNESS_OF_FIT, i));
-                deviances[i] = fitter.fit(replicate, generating).deviance();
+                deviances[i] = fitter.refit(replicate, generating, grid).deviance();
             });
         }
         double[] jackThresholds = new double[jackknife.size()];
         double[] jackSlopes = new double[jackknife.size()];
         runner.run(jackknife.size(), j -> {
-            FitResult r = fitter.fit(jackknife.get(j), generating);
+            FitResult r = fitter.refit(jackknife.get(j), generating);
             jackThresholds[j] = r.threshold();
             jackSlopes[j] = r.slope();
         });

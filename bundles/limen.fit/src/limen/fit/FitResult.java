@@ -23,9 +23,15 @@ public final class FitResult {
     private final List<String> warnings;
     private final long evaluations;
     private final boolean derivativeFree;
+    private final boolean warmStarted;
 
     FitResult(BinomialData data, FitOptions options, PsychometricFunction function, List<String> warnings, long evaluations,
             boolean derivativeFree) {
+        this(data, options, function, warnings, evaluations, derivativeFree, false);
+    }
+
+    FitResult(BinomialData data, FitOptions options, PsychometricFunction function, List<String> warnings, long evaluations,
+            boolean derivativeFree, boolean warmStarted) {
         this.data = data;
         this.options = options;
         this.function = function;
@@ -38,6 +44,12 @@ public final class FitResult {
         this.warnings = List.copyOf(warnings);
         this.evaluations = evaluations;
         this.derivativeFree = derivativeFree;
+        this.warmStarted = warmStarted;
+    }
+
+    /** @return true when a refit kept its warm start's optimum without the full search, for tests */
+    boolean warmStarted() {
+        return warmStarted;
     }
 
     /** @return true when the winning optimum came from the derivative-free fallback (BOBYQA), for tests */

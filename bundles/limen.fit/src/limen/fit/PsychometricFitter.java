@@ -79,10 +79,124 @@ public final class PsychometricFitter {
         return fit(data, extraStart, false);
     }
 
+    /**
+     * Refit of data close to those that gave {@code warm}: bootstrap replicates simulated from it, jackknife
+     * sets that leave one trial out. Newton with scoring climbs from {@code warm} alone
+     * ({@link NewtonScoring#converge}); such data have their optimum near it, so this converges in a few
+     * steps where the full search evaluates the grid and climbs from two starts. The warm result is kept
+     * only when it is a clean interior optimum: converged, finite, location and scale strictly inside their
+     * search box, the steepest allowed function not as good (the ridge toward a step, where the grid's
+     * starts can climb further), and no point of the start grid better (a sign of another, higher mode,
+     * e.g. with non-monotone cells; the grid costs {@value #GRID_LOCATIONS} × {@value #GRID_SCALES}
+     * likelihood evaluations, far less than the climbs). Otherwise the full search {@link #fit(BinomialData, PsychometricFunction)}
+     * with {@code warm} as its extra start decides, exactly as before. A free γ or λ may end on its bound
+     * (the projected method holds it there when the score presses outward). BootstrapWarmStartTest checks on
+     * many replicates that both paths reach the same optimum.
+     */
+    FitResult refit(BinomialData data, PsychometricFunction warm) {
+        return refit(data, warm, null);
+    }
+
+    /**
+     * @param grid start-grid terms shared by data with the same values and trials, or null; results are the
+     *             same with or without it
+     */
+    FitResult refit(BinomialData data, PsychometricFunction warm, GridCache grid) {
+        Objective objective = new Objective(data, options);
+        double[] c = NewtonScoring.converge(objective, objective.coordinates(warm));
+        if (c != null) {
+            double v = objective.value(c);
+            if (cleanInteriorOptimum(objective, c, v) && !(min(gridValues(objective, data, grid)) < v)) {
+                PsychometricFunction f = objective.function(c);
+                return new FitResult(data, options, f, warnings(objective, c, f, data), objective.evaluations(), false, true);
+            }
+        }
+        return fit(data, warm, false, grid);
+    }
+
+    /** @return a cache of start-grid terms for refits of data with the values and trials of {@code design} */
+    GridCache gridCache(BinomialData design) {
+        return new GridCache(design);
+    }
+
+    /**
+     * The start grid's {@link Objective#logTerms} for one design (values and trials), by the grid's guess and
+     * lapse (which follow the smallest and largest proportions, so a bootstrap meets only a few). Turns the
+     * grid's {@value #GRID_LOCATIONS} × {@value #GRID_SCALES} likelihood evaluations of each refit into dot
+     * products with the counts. Thread-safe.
+     */
+    static final class GridCache {
+        private final double[] values;
+        private final int[] trials;
+        private final java.util.concurrent.ConcurrentHashMap<java.util.List<Double>, double[][]> terms = new java.util.concurrent.ConcurrentHashMap<>();
+
+        GridCache(BinomialData design) {
+            this.values = design.values();
+            this.trials = design.trials();
+        }
+    }
+
+    /** @return −ln L at every point of {@link #grid}, through {@code cache} when it fits the data */
+    private double[] gridValues(Objective objective, BinomialData data, GridCache cache) {
+        double[][] points = grid(objective, data);
+        double[] v = new double[points.length];
+        if (cache != null && objective.sameDesign(cache.values, cache.trials)) {
+            double[] gl = gridGuessLapse(data);
+            double[][] t = cache.terms.computeIfAbsent(java.util.List.of(gl[0], gl[1]), key -> {
+                double[][] all = new double[points.length][];
+                for (int p = 0; p < points.length; p++) {
+                    all[p] = objective.logTerms(points[p]);
+                }
+                return all;
+            });
+            for (int p = 0; p < points.length; p++) {
+                v[p] = objective.valueFromLogTerms(t[p]);
+            }
+            return v;
+        }
+        for (int p = 0; p < points.length; p++) {
+            v[p] = objective.value(points[p]);
+        }
+        return v;
+    }
+
+    private static double min(double[] v) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double x : v) {
+            m = Math.min(m, x);
+        }
+        return m;
+    }
+
+    private static boolean cleanInteriorOptimum(Objective objective, double[] c, double v) {
+        if (!Double.isFinite(v)) {
+            return false;
+        }
+        for (double ci : c) {
+            if (!Double.isFinite(ci)) {
+                return false;
+            }
+        }
+        double[] lo = objective.lowerBounds();
+        double[] hi = objective.upperBounds();
+        for (int j = 0; j < 2; j++) {
+            if (c[j] <= lo[j] + BOUND_TOLERANCE || c[j] >= hi[j] - BOUND_TOLERANCE) {
+                return false;
+            }
+        }
+        double[] steepest = c.clone();
+        steepest[1] = lo[1];
+        return objective.value(steepest) > v + FLAT_LOG_LIKELIHOOD;
+    }
+
     /** @param derivativeFreeOnly skip Newton/scoring (tests compare the two optimisers) */
     FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly) {
+        return fit(data, extraStart, derivativeFreeOnly, null);
+    }
+
+    private FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly, GridCache grid) {
         Objective objective = new Objective(data, options);
-        double[][] starts = starts(objective, data, extraStart);
+        double[][] starts = starts(objective, data, extraStart, grid);
         double[] best = null;
         double bestValue = Double.POSITIVE_INFINITY;
         boolean bestDerivativeFree = false;
@@ -111,35 +225,19 @@ public final class PsychometricFitter {
         PsychometricFunction f = objective.function(best);
         return new FitResult(data, options, f, warnings(objective, best, f, data), objective.evaluations(), bestDerivativeFree);
     }
+
     /**
      * @return the best grid point (or the extra start, if better) and the best one at least
      *         {@value #DISTINCT_START} working units from it (absent when every point is closer)
      */
-    private double[][] starts(Objective objective, BinomialData data, PsychometricFunction extraStart) {
-        double minP = 1;
-        double maxP = 0;
-        for (int i = 0; i < data.size(); i++) {
-            minP = Math.min(minP, data.proportion(i));
-            maxP = Math.max(maxP, data.proportion(i));
-        }
-        double guess0 = clamp(minP, 0.1 * options.guessMax(), 0.9 * options.guessMax());
-        double lapse0 = clamp(1 - maxP, 0.1 * options.lapseMax(), 0.9 * options.lapseMax());
-        int count = GRID_LOCATIONS * GRID_SCALES + (extraStart == null ? 0 : 1);
-        double[][] points = new double[count][];
-        double[] values = new double[count];
-        int p = 0;
-        for (int i = 0; i < GRID_LOCATIONS; i++) {
-            double c0 = -0.6 + 1.2 * i / (GRID_LOCATIONS - 1);
-            for (int j = 0; j < GRID_SCALES; j++) {
-                double c1 = Math.log(0.02) + (Math.log(1.0) - Math.log(0.02)) * j / (GRID_SCALES - 1);
-                points[p] = objective.coordinates(c0, c1, guess0, lapse0);
-                values[p] = objective.value(points[p]);
-                p++;
-            }
-        }
+    private double[][] starts(Objective objective, BinomialData data, PsychometricFunction extraStart, GridCache cache) {
+        double[][] grid = grid(objective, data);
+        int count = grid.length + (extraStart == null ? 0 : 1);
+        double[][] points = java.util.Arrays.copyOf(grid, count);
+        double[] values = java.util.Arrays.copyOf(gridValues(objective, data, cache), count);
         if (extraStart != null) {
-            points[p] = objective.coordinates(extraStart);
-            values[p] = objective.value(points[p]);
+            points[count - 1] = objective.coordinates(extraStart);
+            values[count - 1] = objective.value(points[count - 1]);
         }
         int first = 0;
         for (int i = 1; i < count; i++) {
@@ -154,6 +252,37 @@ public final class PsychometricFitter {
             }
         }
         return second < 0 ? new double[][] { points[first] } : new double[][] { points[first], points[second] };
+    }
+
+    /** @return the {@value #GRID_LOCATIONS} × {@value #GRID_SCALES} start points in working coordinates */
+    private double[][] grid(Objective objective, BinomialData data) {
+        double[] gl = gridGuessLapse(data);
+        double guess0 = gl[0];
+        double lapse0 = gl[1];
+        double[][] points = new double[GRID_LOCATIONS * GRID_SCALES][];
+        int p = 0;
+        for (int i = 0; i < GRID_LOCATIONS; i++) {
+            double c0 = -0.6 + 1.2 * i / (GRID_LOCATIONS - 1);
+            for (int j = 0; j < GRID_SCALES; j++) {
+                double c1 = Math.log(0.02) + (Math.log(1.0) - Math.log(0.02)) * j / (GRID_SCALES - 1);
+                points[p++] = objective.coordinates(c0, c1, guess0, lapse0);
+            }
+        }
+        return points;
+    }
+
+    /** @return the grid's γ and λ: the smallest proportion and 1 − the largest, kept inside their bounds */
+    private double[] gridGuessLapse(BinomialData data) {
+        double minP = 1;
+        double maxP = 0;
+        for (int i = 0; i < data.size(); i++) {
+            minP = Math.min(minP, data.proportion(i));
+            maxP = Math.max(maxP, data.proportion(i));
+        }
+        // only a free rate enters the coordinates; a fixed one must not split the cache
+        double guess0 = options.guessFree() ? clamp(minP, 0.1 * options.guessMax(), 0.9 * options.guessMax()) : 0;
+        double lapse0 = options.lapseFree() ? clamp(1 - maxP, 0.1 * options.lapseMax(), 0.9 * options.lapseMax()) : 0;
+        return new double[] { guess0, lapse0 };
     }
 
     /**

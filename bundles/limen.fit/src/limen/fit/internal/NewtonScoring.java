@@ -43,6 +43,8 @@ public final class NewtonScoring {
     private static final double MAX_STEP = 0.5;
     /** Gain of ln L over {@value #STALL_WINDOW} iterations below which the climb stops (a flat ridge). */
     private static final double STALL_GAIN = 1e-10;
+    /** Largest move (working units) over {@value #STALL_WINDOW} stalled iterations that still counts as converged. */
+    private static final double STALLED_MOVE = 1e-6;
 
     private NewtonScoring() {
     }
@@ -53,6 +55,25 @@ public final class NewtonScoring {
      * @return the maximiser in working coordinates, or null when the method failed
      */
     public static double[] maximise(Objective objective, double[] start, double[] known) {
+        return climb(objective, start, known, false);
+    }
+
+    /**
+     * The warm start of a refit from a nearby optimum (e.g. a bootstrap replicate from the estimate that
+     * generated it): the same climb, but it reports success only on convergence, i.e. at a stationary point
+     * of the free coordinates, with every held coordinate pressing against its bound, once the step has
+     * shrunk below rounding, or where ln L has gained less than {@value #STALL_GAIN} over {@value #STALL_WINDOW}
+     * iterations while the iterate moved less than {@value #STALLED_MOVE}. A climb that creeps along a ridge, meets singular information (both matrices not
+     * positive definite), runs out of iterations or cannot decrease −ln L returns null, so the caller can
+     * fall back to the full multi-start search.
+     *
+     * @return the converged maximiser in working coordinates, or null
+     */
+    public static double[] converge(Objective objective, double[] start) {
+        return climb(objective, start, null, true);
+    }
+
+    private static double[] climb(Objective objective, double[] start, double[] known, boolean convergedOnly) {
         int dim = objective.dimension();
         double[] lo = objective.lowerBounds();
         double[] hi = objective.upperBounds();
@@ -67,10 +88,21 @@ public final class NewtonScoring {
         double[] trial = new double[dim];
         double[] history = new double[MAX_ITERATIONS + 1];
         history[0] = value;
+        // iterates of the last STALL_WINDOW + 1 iterations (ring), to tell a converged stall from a creep
+        double[][] recent = convergedOnly ? new double[STALL_WINDOW + 1][] : null;
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
+            if (recent != null) {
+                recent[iteration % recent.length] = c.clone();
+            }
             if (iteration >= STALL_WINDOW && history[iteration - STALL_WINDOW] - value < STALL_GAIN) {
-                // a ridge along which ln L still creeps up (a near-step function): no data can tell these apart
-                return c;
+                // a ridge along which ln L still creeps up (a near-step function): no data can tell these apart;
+                // or an optimum where the last steps gain only rounding, which a warm start accepts when the
+                // iterate has stopped moving
+                if (!convergedOnly) {
+                    return c;
+                }
+                double[] before = recent[(iteration - STALL_WINDOW) % recent.length];
+                return distance(c, before) < STALLED_MOVE ? c : null;
             }
             objective.scoreAndInformation(c, score, expected, observed);
             boolean[] held = new boolean[dim];
@@ -86,6 +118,9 @@ public final class NewtonScoring {
             boolean scoring = step == null;
             if (scoring) {
                 step = solve(expected, score, held, free);
+            }
+            if (step == null && convergedOnly) {
+                return null; // a degenerate function (a step, or one that has left the data): the full search decides
             }
             if (step == null) {
                 // both matrices singular: the function has turned into a step or left the data, where every

@@ -132,6 +132,54 @@ public final class Objective implements MultivariateFunction {
     }
 
     /**
+     * The per-cell logarithms that {@link #value} weights by the counts: ln ψ_i and ln(1 − ψ_i) at c (each
+     * guarded below by ln of the smallest normal double, as there). They do not depend on the correct counts
+     * k_i, so data sets with the same values and trials (bootstrap replicates) can share them.
+     *
+     * @return {ln ψ_0, ln(1 − ψ_0), ln ψ_1, ...}
+     */
+    public double[] logTerms(double[] c) {
+        double m = workingLocation(c);
+        double s = workingScale(c);
+        double g = guess(c);
+        double l = lapse(c);
+        double r = 1 - g - l;
+        double[] terms = new double[2 * u.length];
+        double[] e = new double[4];
+        for (int i = 0; i < u.length; i++) {
+            working.evaluate(u[i], m, s, e);
+            terms[2 * i] = Math.log(Math.max(g + r * e[0], Double.MIN_NORMAL));
+            terms[2 * i + 1] = Math.log(Math.max(l + r * e[1], Double.MIN_NORMAL));
+        }
+        return terms;
+    }
+
+    /**
+     * @param terms {@link #logTerms} of the same point, from data with these values and trials
+     * @return −ln L, the same arithmetic and so the same double as {@link #value} at that point
+     */
+    public double valueFromLogTerms(double[] terms) {
+        evaluations++;
+        double sum = 0;
+        for (int i = 0; i < u.length; i++) {
+            int ki = k[i];
+            int misses = n[i] - ki;
+            if (ki > 0) {
+                sum += ki * terms[2 * i];
+            }
+            if (misses > 0) {
+                sum += misses * terms[2 * i + 1];
+            }
+        }
+        return -sum;
+    }
+
+    /** @return whether these are the stimulus values and trial counts of this objective's data */
+    public boolean sameDesign(double[] values, int[] trials) {
+        return java.util.Arrays.equals(x, values) && java.util.Arrays.equals(n, trials);
+    }
+
+    /**
      * The score (gradient of ln L), the expected (Fisher) information and the observed information (minus
      * the Hessian of ln L) with respect to the working coordinates:
      * <pre>
