@@ -20,6 +20,8 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link limen.model.ExposureEstimate#getPeakLevelDbSpl <em>Peak Level Db Spl</em>}</li>
  *   <li>{@link limen.model.ExposureEstimate#getEquivalentLevelDbSpl <em>Equivalent Level Db Spl</em>}</li>
  *   <li>{@link limen.model.ExposureEstimate#getSoundOnSeconds <em>Sound On Seconds</em>}</li>
+ *   <li>{@link limen.model.ExposureEstimate#getNioshDosePercent <em>Niosh Dose Percent</em>}</li>
+ *   <li>{@link limen.model.ExposureEstimate#getOshaDosePercent <em>Osha Dose Percent</em>}</li>
  * </ul>
  *
  * @see limen.model.LimenPackage#getExposureEstimate()
@@ -101,5 +103,55 @@ public interface ExposureEstimate extends EObject {
 	 * @generated
 	 */
 	void setSoundOnSeconds(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Niosh Dose Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Daily noise dose of the louder ear by the NIOSH (1998) recommended exposure limit (85 dBA over 8 h, 3 dB exchange rate), in percent, from the A-weighted levels of the presented stimuli.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Niosh Dose Percent</em>' attribute.
+	 * @see #setNioshDosePercent(double)
+	 * @see limen.model.LimenPackage#getExposureEstimate_NioshDosePercent()
+	 * @model
+	 * @generated
+	 */
+	double getNioshDosePercent();
+
+	/**
+	 * Sets the value of the '{@link limen.model.ExposureEstimate#getNioshDosePercent <em>Niosh Dose Percent</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Niosh Dose Percent</em>' attribute.
+	 * @see #getNioshDosePercent()
+	 * @generated
+	 */
+	void setNioshDosePercent(double value);
+
+	/**
+	 * Returns the value of the '<em><b>Osha Dose Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Daily noise dose of the louder ear by the OSHA 29 CFR 1910.95 permissible exposure limit (90 dBA over 8 h, 5 dB exchange rate, 80 dBA threshold), in percent.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Osha Dose Percent</em>' attribute.
+	 * @see #setOshaDosePercent(double)
+	 * @see limen.model.LimenPackage#getExposureEstimate_OshaDosePercent()
+	 * @model
+	 * @generated
+	 */
+	double getOshaDosePercent();
+
+	/**
+	 * Sets the value of the '{@link limen.model.ExposureEstimate#getOshaDosePercent <em>Osha Dose Percent</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Osha Dose Percent</em>' attribute.
+	 * @see #getOshaDosePercent()
+	 * @generated
+	 */
+	void setOshaDosePercent(double value);
 
 } // ExposureEstimate

@@ -464,13 +464,22 @@ public interface LimenPackage extends EPackage {
 	int TASK__FEEDBACK = 3;
 
 	/**
+	 * The feature id for the '<em><b>Early Responses</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int TASK__EARLY_RESPONSES = 4;
+
+	/**
 	 * The number of structural features of the '<em>Task</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int TASK_FEATURE_COUNT = 4;
+	int TASK_FEATURE_COUNT = 5;
 
 	/**
 	 * The operation id for the '<em>Valid Timing</em>' operation.
@@ -535,6 +544,15 @@ public interface LimenPackage extends EPackage {
 	 * @ordered
 	 */
 	int FORCED_CHOICE_TASK__FEEDBACK = TASK__FEEDBACK;
+
+	/**
+	 * The feature id for the '<em><b>Early Responses</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int FORCED_CHOICE_TASK__EARLY_RESPONSES = TASK__EARLY_RESPONSES;
 
 	/**
 	 * The feature id for the '<em><b>Interval Count</b></em>' attribute.
@@ -635,6 +653,15 @@ public interface LimenPackage extends EPackage {
 	 * @ordered
 	 */
 	int YES_NO_TASK__FEEDBACK = TASK__FEEDBACK;
+
+	/**
+	 * The feature id for the '<em><b>Early Responses</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int YES_NO_TASK__EARLY_RESPONSES = TASK__EARLY_RESPONSES;
 
 	/**
 	 * The feature id for the '<em><b>Catch Trial Rate</b></em>' attribute.
@@ -2559,13 +2586,31 @@ public interface LimenPackage extends EPackage {
 	int EXPOSURE_ESTIMATE__SOUND_ON_SECONDS = 2;
 
 	/**
+	 * The feature id for the '<em><b>Niosh Dose Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT = 3;
+
+	/**
+	 * The feature id for the '<em><b>Osha Dose Percent</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT = 4;
+
+	/**
 	 * The number of structural features of the '<em>Exposure Estimate</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int EXPOSURE_ESTIMATE_FEATURE_COUNT = 3;
+	int EXPOSURE_ESTIMATE_FEATURE_COUNT = 5;
 
 	/**
 	 * The number of operations of the '<em>Exposure Estimate</em>' class.
@@ -2577,6 +2622,16 @@ public interface LimenPackage extends EPackage {
 	int EXPOSURE_ESTIMATE_OPERATION_COUNT = 0;
 
 	/**
+	 * The meta object id for the '{@link limen.model.EarlyResponsePolicy <em>Early Response Policy</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see limen.model.EarlyResponsePolicy
+	 * @see limen.model.impl.LimenPackageImpl#getEarlyResponsePolicy()
+	 * @generated
+	 */
+	int EARLY_RESPONSE_POLICY = 30;
+
+	/**
 	 * The meta object id for the '{@link limen.model.OrderingPolicy <em>Ordering Policy</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2584,7 +2639,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getOrderingPolicy()
 	 * @generated
 	 */
-	int ORDERING_POLICY = 30;
+	int ORDERING_POLICY = 31;
 
 	/**
 	 * The meta object id for the '{@link limen.model.StimulusKind <em>Stimulus Kind</em>}' enum.
@@ -2594,7 +2649,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getStimulusKind()
 	 * @generated
 	 */
-	int STIMULUS_KIND = 31;
+	int STIMULUS_KIND = 32;
 
 	/**
 	 * The meta object id for the '{@link limen.model.Ear <em>Ear</em>}' enum.
@@ -2604,7 +2659,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getEar()
 	 * @generated
 	 */
-	int EAR = 32;
+	int EAR = 33;
 
 	/**
 	 * The meta object id for the '{@link limen.model.QuantityUnit <em>Quantity Unit</em>}' enum.
@@ -2614,7 +2669,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getQuantityUnit()
 	 * @generated
 	 */
-	int QUANTITY_UNIT = 33;
+	int QUANTITY_UNIT = 34;
 
 	/**
 	 * The meta object id for the '{@link limen.model.Scale <em>Scale</em>}' enum.
@@ -2624,7 +2679,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getScale()
 	 * @generated
 	 */
-	int SCALE = 34;
+	int SCALE = 35;
 
 	/**
 	 * The meta object id for the '{@link limen.model.StepMode <em>Step Mode</em>}' enum.
@@ -2634,7 +2689,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getStepMode()
 	 * @generated
 	 */
-	int STEP_MODE = 35;
+	int STEP_MODE = 36;
 
 	/**
 	 * The meta object id for the '{@link limen.model.BayesianVariant <em>Bayesian Variant</em>}' enum.
@@ -2644,7 +2699,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getBayesianVariant()
 	 * @generated
 	 */
-	int BAYESIAN_VARIANT = 36;
+	int BAYESIAN_VARIANT = 37;
 
 	/**
 	 * The meta object id for the '{@link limen.model.EstimatePlacement <em>Estimate Placement</em>}' enum.
@@ -2654,7 +2709,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getEstimatePlacement()
 	 * @generated
 	 */
-	int ESTIMATE_PLACEMENT = 37;
+	int ESTIMATE_PLACEMENT = 38;
 
 	/**
 	 * The meta object id for the '{@link limen.model.LapseMode <em>Lapse Mode</em>}' enum.
@@ -2664,7 +2719,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getLapseMode()
 	 * @generated
 	 */
-	int LAPSE_MODE = 38;
+	int LAPSE_MODE = 39;
 
 	/**
 	 * The meta object id for the '{@link limen.model.PsychometricFamily <em>Psychometric Family</em>}' enum.
@@ -2674,7 +2729,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getPsychometricFamily()
 	 * @generated
 	 */
-	int PSYCHOMETRIC_FAMILY = 39;
+	int PSYCHOMETRIC_FAMILY = 40;
 
 	/**
 	 * The meta object id for the '{@link limen.model.NoiseSpectrum <em>Noise Spectrum</em>}' enum.
@@ -2684,7 +2739,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getNoiseSpectrum()
 	 * @generated
 	 */
-	int NOISE_SPECTRUM = 40;
+	int NOISE_SPECTRUM = 41;
 
 	/**
 	 * The meta object id for the '{@link limen.model.SettingType <em>Setting Type</em>}' enum.
@@ -2694,7 +2749,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getSettingType()
 	 * @generated
 	 */
-	int SETTING_TYPE = 41;
+	int SETTING_TYPE = 42;
 
 	/**
 	 * The meta object id for the '{@link limen.model.SessionStatus <em>Session Status</em>}' enum.
@@ -2704,7 +2759,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getSessionStatus()
 	 * @generated
 	 */
-	int SESSION_STATUS = 42;
+	int SESSION_STATUS = 43;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -2714,7 +2769,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 43;
+	int INSTANT = 44;
 
 	/**
 	 * The meta object id for the '<em>Local Date</em>' data type.
@@ -2724,7 +2779,7 @@ public interface LimenPackage extends EPackage {
 	 * @see limen.model.impl.LimenPackageImpl#getLocalDate()
 	 * @generated
 	 */
-	int LOCAL_DATE = 44;
+	int LOCAL_DATE = 45;
 
 
 	/**
@@ -3099,6 +3154,17 @@ public interface LimenPackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getTask_Feedback();
+
+	/**
+	 * Returns the meta object for the attribute '{@link limen.model.Task#getEarlyResponses <em>Early Responses</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Early Responses</em>'.
+	 * @see limen.model.Task#getEarlyResponses()
+	 * @see #getTask()
+	 * @generated
+	 */
+	EAttribute getTask_EarlyResponses();
 
 	/**
 	 * Returns the meta object for the '{@link limen.model.Task#validTiming(org.eclipse.emf.common.util.DiagnosticChain, java.util.Map) <em>Valid Timing</em>}' operation.
@@ -4741,6 +4807,38 @@ public interface LimenPackage extends EPackage {
 	EAttribute getExposureEstimate_SoundOnSeconds();
 
 	/**
+	 * Returns the meta object for the attribute '{@link limen.model.ExposureEstimate#getNioshDosePercent <em>Niosh Dose Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Niosh Dose Percent</em>'.
+	 * @see limen.model.ExposureEstimate#getNioshDosePercent()
+	 * @see #getExposureEstimate()
+	 * @generated
+	 */
+	EAttribute getExposureEstimate_NioshDosePercent();
+
+	/**
+	 * Returns the meta object for the attribute '{@link limen.model.ExposureEstimate#getOshaDosePercent <em>Osha Dose Percent</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Osha Dose Percent</em>'.
+	 * @see limen.model.ExposureEstimate#getOshaDosePercent()
+	 * @see #getExposureEstimate()
+	 * @generated
+	 */
+	EAttribute getExposureEstimate_OshaDosePercent();
+
+	/**
+	 * Returns the meta object for enum '{@link limen.model.EarlyResponsePolicy <em>Early Response Policy</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Early Response Policy</em>'.
+	 * @see limen.model.EarlyResponsePolicy
+	 * @generated
+	 */
+	EEnum getEarlyResponsePolicy();
+
+	/**
 	 * Returns the meta object for enum '{@link limen.model.OrderingPolicy <em>Ordering Policy</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -5210,6 +5308,14 @@ public interface LimenPackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute TASK__FEEDBACK = eINSTANCE.getTask_Feedback();
+
+		/**
+		 * The meta object literal for the '<em><b>Early Responses</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute TASK__EARLY_RESPONSES = eINSTANCE.getTask_EarlyResponses();
 
 		/**
 		 * The meta object literal for the '<em><b>Valid Timing</b></em>' operation.
@@ -6484,6 +6590,32 @@ public interface LimenPackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute EXPOSURE_ESTIMATE__SOUND_ON_SECONDS = eINSTANCE.getExposureEstimate_SoundOnSeconds();
+
+		/**
+		 * The meta object literal for the '<em><b>Niosh Dose Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT = eINSTANCE.getExposureEstimate_NioshDosePercent();
+
+		/**
+		 * The meta object literal for the '<em><b>Osha Dose Percent</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT = eINSTANCE.getExposureEstimate_OshaDosePercent();
+
+		/**
+		 * The meta object literal for the '{@link limen.model.EarlyResponsePolicy <em>Early Response Policy</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see limen.model.EarlyResponsePolicy
+		 * @see limen.model.impl.LimenPackageImpl#getEarlyResponsePolicy()
+		 * @generated
+		 */
+		EEnum EARLY_RESPONSE_POLICY = eINSTANCE.getEarlyResponsePolicy();
 
 		/**
 		 * The meta object literal for the '{@link limen.model.OrderingPolicy <em>Ordering Policy</em>}' enum.

@@ -25,6 +25,7 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link limen.model.Task#getResponseWindowSeconds <em>Response Window Seconds</em>}</li>
  *   <li>{@link limen.model.Task#getInterTrialIntervalSeconds <em>Inter Trial Interval Seconds</em>}</li>
  *   <li>{@link limen.model.Task#isFeedback <em>Feedback</em>}</li>
+ *   <li>{@link limen.model.Task#getEarlyResponses <em>Early Responses</em>}</li>
  * </ul>
  *
  * @see limen.model.LimenPackage#getTask()
@@ -158,6 +159,34 @@ public interface Task extends EObject {
 	 * @generated
 	 */
 	void setFeedback(boolean value);
+
+	/**
+	 * Returns the value of the '<em><b>Early Responses</b></em>' attribute.
+	 * The literals are from the enumeration {@link limen.model.EarlyResponsePolicy}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * What a response given before the end of the last observation interval does: ignored (the participant answers again after the sound) or taken and recorded as early (a negative response time).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Early Responses</em>' attribute.
+	 * @see limen.model.EarlyResponsePolicy
+	 * @see #setEarlyResponses(EarlyResponsePolicy)
+	 * @see limen.model.LimenPackage#getTask_EarlyResponses()
+	 * @model
+	 * @generated
+	 */
+	EarlyResponsePolicy getEarlyResponses();
+
+	/**
+	 * Sets the value of the '{@link limen.model.Task#getEarlyResponses <em>Early Responses</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Early Responses</em>' attribute.
+	 * @see limen.model.EarlyResponsePolicy
+	 * @see #getEarlyResponses()
+	 * @generated
+	 */
+	void setEarlyResponses(EarlyResponsePolicy value);
 
 	/**
 	 * <!-- begin-user-doc -->

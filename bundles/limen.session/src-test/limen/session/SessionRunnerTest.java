@@ -131,6 +131,51 @@ class SessionRunnerTest {
         assertEquals(full.get(k).track(), rows.get(k).track());
     }
 
+    /**
+     * The header's exposure covers the whole session, also when it was resumed: the replayed trials count. Every
+     * trial of this battery has the same buffer length, so sound-on time is trials x one trial's length. The NIOSH
+     * dose is bracketed with NIOSH (1998) Criteria for a Recommended Standard, eq. 1-1 / 1-2: D = 100 Σ C_n/T_n with
+     * T = 8 h / 2^((L - 85)/3), applied to the stored L_Aeq over the buffers: the stored dose counts only the time
+     * the tones sound (not the silent gaps the L_Aeq averages over, which lowers L_Aeq) and counts ramps as steady
+     * (errs loud), so it lies above that figure, by less than the gaps' share of the buffer. OSHA 29 CFR 1910.95
+     * counts no time below 80 dBA: these soft tones give a dose of 0. (The dose arithmetic itself is checked
+     * against both standards in limen.signal's exposure tests.)
+     */
+    @Test
+    void headerExposureCoversResumedSessionsAndCarriesTheDoses() throws Exception {
+        SessionFolder whole = newSession("intensity-discrimination", 31);
+        run(whole, 4);
+        int wholeTrials = whole.readJournal().rows().size();
+        limen.model.ExposureEstimate a = SessionFolder.open(whole.path()).header().getExposure();
+        double perTrial = a.getSoundOnSeconds() / wholeTrials;
+        assertTrue(perTrial > 0.5, "one trial's sound-on time " + perTrial);
+
+        SessionFolder f = newSession("intensity-discrimination", 32);
+        run(f, 5);
+        List<String> lines = Files.readAllLines(f.journalFile());
+        int k = (lines.size() - 1) / 2;
+        Files.writeString(f.journalFile(), String.join("\n", lines.subList(0, k + 1)) + "\n");
+        Files.delete(f.path().resolve(SessionSeal.FILE_NAME));
+        f.header().setStatus(SessionStatus.RUNNING);
+        f.header().setExposure(null);
+        f.saveHeader();
+        SessionFolder again = SessionFolder.open(f.path());
+        assertEquals(SessionStatus.COMPLETED, run(again, 6).status());
+        int trials = again.readJournal().rows().size();
+        limen.model.ExposureEstimate e = SessionFolder.open(f.path()).header().getExposure();
+        assertEquals(trials * perTrial, e.getSoundOnSeconds(), 1e-6, "sound-on time after a resume at trial " + k);
+
+        double leq = e.getEquivalentLevelDbSpl();
+        double allowedSeconds = 8 * 3600 / Math.pow(2, (leq - 85) / 3);
+        double niosh = 100 * e.getSoundOnSeconds() / allowedSeconds;
+        assertTrue(e.getNioshDosePercent() > 0);
+        assertTrue(e.getNioshDosePercent() >= 0.98 * niosh && e.getNioshDosePercent() <= 1.5 * niosh,
+                "NIOSH dose " + e.getNioshDosePercent() + " % against " + niosh + " % at L_Aeq " + leq);
+        assertEquals(0, e.getOshaDosePercent(), 0, "OSHA counts no time below 80 dBA (L_Aeq " + leq + ")");
+        assertTrue(e.getPeakLevelDbSpl() >= leq, "peak " + e.getPeakLevelDbSpl() + " below L_Aeq " + leq);
+        assertTrue(e.getPeakLevelDbSpl() <= again.header().getCalibration().getCeilingDbSpl(), "peak above the ceiling");
+    }
+
     @Test
     void resumingWithAnotherSeedIsRefused() throws Exception {
         SessionFolder f = newSession("intensity-discrimination", 5);

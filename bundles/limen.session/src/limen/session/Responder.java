@@ -16,6 +16,14 @@ public interface Responder {
      */
     Response respond(TrialContext trial) throws InterruptedException;
 
+    /**
+     * The trial's sound is about to go to the output (called on the runner's thread just before {@code play}, then
+     * {@link #respond} follows): a responder that takes answers while the sound plays learns the trial, and its
+     * step's rules such as {@link limen.model.Task#getEarlyResponses()}, here. Nothing by default.
+     */
+    default void trialStarting(TrialContext trial) {
+    }
+
     /** Shows feedback after a trial when the step asks for it (nothing by default). */
     default void feedback(TrialContext trial, boolean correct) {
     }

@@ -30,6 +30,7 @@ import limen.session.journal.JournalReader;
 import limen.session.journal.JournalWriter;
 import limen.session.journal.SessionSeal;
 import limen.signal.Exposure;
+import limen.signal.ExposureCriterion;
 
 /**
  * A session in an archive: a folder {@code ARCHIVE/PARTICIPANT/BATTERY-yyyyMMdd-HHmmss-XXXX/} holding the header
@@ -148,7 +149,20 @@ public final class SessionFolder {
         LimenFiles.save(header, path.resolve(HEADER_FILE));
     }
 
-    void recordExposure(Exposure total) {
+    private static double finiteOrZero(double v) {
+        return Double.isFinite(v) ? v : 0;
+    }
+
+    private static double hundredths(double v) {
+        return Double.isFinite(v) ? Math.round(v * 100) / 100.0 : 0;
+    }
+
+    /**
+     * Stores the session's exposure estimate in the header: sound-on time, L_Aeq over it, the louder ear's daily
+     * doses by NIOSH (1998) and OSHA 29 CFR 1910.95, and the highest level the guard measured (kept when higher
+     * than the one stored before a resume).
+     */
+    void recordExposure(Exposure total, double peakDbSpl) {
         ExposureEstimate e = header.getExposure();
         if (e == null) {
             e = LimenFactory.eINSTANCE.createExposureEstimate();
@@ -157,5 +171,11 @@ public final class SessionFolder {
         e.setSoundOnSeconds(total.durationSeconds());
         double leq = Math.max(total.leqDbA(0), total.leqDbA(1));
         e.setEquivalentLevelDbSpl(Double.isFinite(leq) ? Math.round(leq * 100) / 100.0 : 0);
+        // doses unrounded: a research session's dose is often a few thousandths of a percent
+        e.setNioshDosePercent(finiteOrZero(total.worstEarDosePercent(ExposureCriterion.NIOSH_1998)));
+        e.setOshaDosePercent(finiteOrZero(total.worstEarDosePercent(ExposureCriterion.OSHA_1910_95)));
+        if (Double.isFinite(peakDbSpl) && peakDbSpl > e.getPeakLevelDbSpl()) {
+            e.setPeakLevelDbSpl(hundredths(peakDbSpl));
+        }
     }
 }

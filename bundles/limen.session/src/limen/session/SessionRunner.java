@@ -64,6 +64,7 @@ public final class SessionRunner {
     private final boolean realtime;
     private final SafetyGuard guard;
     private Exposure exposure = Exposure.none();
+    private double peakDbSpl = Double.NEGATIVE_INFINITY;
     private final List<Double> turnaround = new ArrayList<>();
     private final java.util.concurrent.ExecutorService prefetcher = java.util.concurrent.Executors
             .newSingleThreadExecutor(r -> {
@@ -151,6 +152,8 @@ public final class SessionRunner {
                     if (replayed < recorded.size()) {
                         JournalRow row = recorded.get(replayed++);
                         checkReplay(row, step, s + 1, track, plan);
+                        // the header's exposure covers the whole session: re-render the replayed trial (same seed)
+                        addExposure(renderChecked(step, plan, standardLevel, row.seq()));
                         interleaver.answer(new Answer(plan.forcedChoice() ? row.response() - 1 : row.response()));
                         continue;
                     }
@@ -179,6 +182,7 @@ public final class SessionRunner {
                     }
                     TrialContext ctx = new TrialContext(journal.nextSeq(), s + 1, order.size(), step, track.name(),
                             track.task(), plan, sound, trialInStep);
+                    responder.trialStarting(ctx);
                     try {
                         output.play(sound);
                     } catch (DeviceLostException e) {
@@ -186,7 +190,7 @@ public final class SessionRunner {
                         return finish(journal, SessionStatus.INTERRUPTED, "sound device lost: " + e.getMessage()
                                 + "; every recorded trial is kept, resume the session when the device is back");
                     }
-                    exposure = exposure.plus(Exposure.of(sound));
+                    addExposure(sound);
                     Responder.Response response = responder.respond(ctx);
                     if (response == null) {
                         return finish(journal, SessionStatus.ABORTED, "aborted while waiting for an answer");
@@ -232,6 +236,13 @@ public final class SessionRunner {
         }
     }
 
+    private void addExposure(CheckedStimulus sound) {
+        exposure = exposure.plus(Exposure.of(sound));
+        for (int c = 0; c < 2; c++) {
+            peakDbSpl = Math.max(peakDbSpl, sound.measuredLevelDbSpl(c));
+        }
+    }
+
     private CheckedStimulus renderChecked(Step step, TrialPlan plan, double standardLevel, long seq) {
         long trialSeed = new SplittableRandom(header.getRandomSeed() ^ (0x9E3779B97F4A7C15L * seq)).nextLong();
         Stimulus raw = renderer.render(step, plan, standardLevel, new SplittableRandom(trialSeed));
@@ -261,7 +272,7 @@ public final class SessionRunner {
         prefetcher.shutdownNow();
         header.setEndTime(Instant.now(clock));
         header.setStatus(status);
-        folder.recordExposure(exposure);
+        folder.recordExposure(exposure, peakDbSpl);
         if (status != SessionStatus.INTERRUPTED) {
             new SessionSeal(journal.nextSeq() - 1, journal.lastChecksum()).write(folder.path());
         }

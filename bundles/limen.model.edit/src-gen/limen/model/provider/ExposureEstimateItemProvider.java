@@ -63,6 +63,8 @@ public class ExposureEstimateItemProvider
 			addPeakLevelDbSplPropertyDescriptor(object);
 			addEquivalentLevelDbSplPropertyDescriptor(object);
 			addSoundOnSecondsPropertyDescriptor(object);
+			addNioshDosePercentPropertyDescriptor(object);
+			addOshaDosePercentPropertyDescriptor(object);
 		}
 		return itemPropertyDescriptors;
 	}
@@ -134,6 +136,50 @@ public class ExposureEstimateItemProvider
 	}
 
 	/**
+	 * This adds a property descriptor for the Niosh Dose Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addNioshDosePercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_ExposureEstimate_nioshDosePercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_ExposureEstimate_nioshDosePercent_feature", "_UI_ExposureEstimate_type"),
+				 LimenPackage.Literals.EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Osha Dose Percent feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addOshaDosePercentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_ExposureEstimate_oshaDosePercent_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_ExposureEstimate_oshaDosePercent_feature", "_UI_ExposureEstimate_type"),
+				 LimenPackage.Literals.EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
 	 * This returns ExposureEstimate.gif.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -172,6 +218,8 @@ public class ExposureEstimateItemProvider
 			case LimenPackage.EXPOSURE_ESTIMATE__PEAK_LEVEL_DB_SPL:
 			case LimenPackage.EXPOSURE_ESTIMATE__EQUIVALENT_LEVEL_DB_SPL:
 			case LimenPackage.EXPOSURE_ESTIMATE__SOUND_ON_SECONDS:
+			case LimenPackage.EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT:
+			case LimenPackage.EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), false, true));
 				return;
 		}

@@ -64,6 +64,7 @@ public class TaskItemProvider
 			addResponseWindowSecondsPropertyDescriptor(object);
 			addInterTrialIntervalSecondsPropertyDescriptor(object);
 			addFeedbackPropertyDescriptor(object);
+			addEarlyResponsesPropertyDescriptor(object);
 		}
 		return itemPropertyDescriptors;
 	}
@@ -157,6 +158,28 @@ public class TaskItemProvider
 	}
 
 	/**
+	 * This adds a property descriptor for the Early Responses feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addEarlyResponsesPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_Task_earlyResponses_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_Task_earlyResponses_feature", "_UI_Task_type"),
+				 LimenPackage.Literals.TASK__EARLY_RESPONSES,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
 	 * This returns the label text for the adapted class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -185,6 +208,7 @@ public class TaskItemProvider
 			case LimenPackage.TASK__RESPONSE_WINDOW_SECONDS:
 			case LimenPackage.TASK__INTER_TRIAL_INTERVAL_SECONDS:
 			case LimenPackage.TASK__FEEDBACK:
+			case LimenPackage.TASK__EARLY_RESPONSES:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), false, true));
 				return;
 		}

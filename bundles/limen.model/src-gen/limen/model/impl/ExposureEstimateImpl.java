@@ -23,6 +23,8 @@ import org.eclipse.emf.ecore.impl.EObjectImpl;
  *   <li>{@link limen.model.impl.ExposureEstimateImpl#getPeakLevelDbSpl <em>Peak Level Db Spl</em>}</li>
  *   <li>{@link limen.model.impl.ExposureEstimateImpl#getEquivalentLevelDbSpl <em>Equivalent Level Db Spl</em>}</li>
  *   <li>{@link limen.model.impl.ExposureEstimateImpl#getSoundOnSeconds <em>Sound On Seconds</em>}</li>
+ *   <li>{@link limen.model.impl.ExposureEstimateImpl#getNioshDosePercent <em>Niosh Dose Percent</em>}</li>
+ *   <li>{@link limen.model.impl.ExposureEstimateImpl#getOshaDosePercent <em>Osha Dose Percent</em>}</li>
  * </ul>
  *
  * @generated
@@ -87,6 +89,46 @@ public class ExposureEstimateImpl extends EObjectImpl implements ExposureEstimat
 	 * @ordered
 	 */
 	protected double soundOnSeconds = SOUND_ON_SECONDS_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getNioshDosePercent() <em>Niosh Dose Percent</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getNioshDosePercent()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double NIOSH_DOSE_PERCENT_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getNioshDosePercent() <em>Niosh Dose Percent</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getNioshDosePercent()
+	 * @generated
+	 * @ordered
+	 */
+	protected double nioshDosePercent = NIOSH_DOSE_PERCENT_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getOshaDosePercent() <em>Osha Dose Percent</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getOshaDosePercent()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double OSHA_DOSE_PERCENT_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getOshaDosePercent() <em>Osha Dose Percent</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getOshaDosePercent()
+	 * @generated
+	 * @ordered
+	 */
+	protected double oshaDosePercent = OSHA_DOSE_PERCENT_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -182,6 +224,52 @@ public class ExposureEstimateImpl extends EObjectImpl implements ExposureEstimat
 	 * @generated
 	 */
 	@Override
+	public double getNioshDosePercent() {
+		return nioshDosePercent;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setNioshDosePercent(double newNioshDosePercent) {
+		double oldNioshDosePercent = nioshDosePercent;
+		nioshDosePercent = newNioshDosePercent;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, LimenPackage.EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT, oldNioshDosePercent, nioshDosePercent));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getOshaDosePercent() {
+		return oshaDosePercent;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setOshaDosePercent(double newOshaDosePercent) {
+		double oldOshaDosePercent = oshaDosePercent;
+		oshaDosePercent = newOshaDosePercent;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, LimenPackage.EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT, oldOshaDosePercent, oshaDosePercent));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case LimenPackage.EXPOSURE_ESTIMATE__PEAK_LEVEL_DB_SPL:
@@ -190,6 +278,10 @@ public class ExposureEstimateImpl extends EObjectImpl implements ExposureEstimat
 				return getEquivalentLevelDbSpl();
 			case LimenPackage.EXPOSURE_ESTIMATE__SOUND_ON_SECONDS:
 				return getSoundOnSeconds();
+			case LimenPackage.EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT:
+				return getNioshDosePercent();
+			case LimenPackage.EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT:
+				return getOshaDosePercent();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -210,6 +302,12 @@ public class ExposureEstimateImpl extends EObjectImpl implements ExposureEstimat
 				return;
 			case LimenPackage.EXPOSURE_ESTIMATE__SOUND_ON_SECONDS:
 				setSoundOnSeconds((Double)newValue);
+				return;
+			case LimenPackage.EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT:
+				setNioshDosePercent((Double)newValue);
+				return;
+			case LimenPackage.EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT:
+				setOshaDosePercent((Double)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -232,6 +330,12 @@ public class ExposureEstimateImpl extends EObjectImpl implements ExposureEstimat
 			case LimenPackage.EXPOSURE_ESTIMATE__SOUND_ON_SECONDS:
 				setSoundOnSeconds(SOUND_ON_SECONDS_EDEFAULT);
 				return;
+			case LimenPackage.EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT:
+				setNioshDosePercent(NIOSH_DOSE_PERCENT_EDEFAULT);
+				return;
+			case LimenPackage.EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT:
+				setOshaDosePercent(OSHA_DOSE_PERCENT_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -250,6 +354,10 @@ public class ExposureEstimateImpl extends EObjectImpl implements ExposureEstimat
 				return equivalentLevelDbSpl != EQUIVALENT_LEVEL_DB_SPL_EDEFAULT;
 			case LimenPackage.EXPOSURE_ESTIMATE__SOUND_ON_SECONDS:
 				return soundOnSeconds != SOUND_ON_SECONDS_EDEFAULT;
+			case LimenPackage.EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT:
+				return nioshDosePercent != NIOSH_DOSE_PERCENT_EDEFAULT;
+			case LimenPackage.EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT:
+				return oshaDosePercent != OSHA_DOSE_PERCENT_EDEFAULT;
 		}
 		return super.eIsSet(featureID);
 	}
@@ -270,6 +378,10 @@ public class ExposureEstimateImpl extends EObjectImpl implements ExposureEstimat
 		result.append(equivalentLevelDbSpl);
 		result.append(", soundOnSeconds: ");
 		result.append(soundOnSeconds);
+		result.append(", nioshDosePercent: ");
+		result.append(nioshDosePercent);
+		result.append(", oshaDosePercent: ");
+		result.append(oshaDosePercent);
 		result.append(')');
 		return result.toString();
 	}

@@ -98,6 +98,8 @@ public class LimenFactoryImpl extends EFactoryImpl implements LimenFactory {
 	@Override
 	public Object createFromString(EDataType eDataType, String initialValue) {
 		switch (eDataType.getClassifierID()) {
+			case LimenPackage.EARLY_RESPONSE_POLICY:
+				return createEarlyResponsePolicyFromString(eDataType, initialValue);
 			case LimenPackage.ORDERING_POLICY:
 				return createOrderingPolicyFromString(eDataType, initialValue);
 			case LimenPackage.STIMULUS_KIND:
@@ -141,6 +143,8 @@ public class LimenFactoryImpl extends EFactoryImpl implements LimenFactory {
 	@Override
 	public String convertToString(EDataType eDataType, Object instanceValue) {
 		switch (eDataType.getClassifierID()) {
+			case LimenPackage.EARLY_RESPONSE_POLICY:
+				return convertEarlyResponsePolicyToString(eDataType, instanceValue);
 			case LimenPackage.ORDERING_POLICY:
 				return convertOrderingPolicyToString(eDataType, instanceValue);
 			case LimenPackage.STIMULUS_KIND:
@@ -449,6 +453,26 @@ public class LimenFactoryImpl extends EFactoryImpl implements LimenFactory {
 	public ExposureEstimate createExposureEstimate() {
 		ExposureEstimateImpl exposureEstimate = new ExposureEstimateImpl();
 		return exposureEstimate;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public EarlyResponsePolicy createEarlyResponsePolicyFromString(EDataType eDataType, String initialValue) {
+		EarlyResponsePolicy result = EarlyResponsePolicy.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertEarlyResponsePolicyToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
 	}
 
 	/**

@@ -14,6 +14,7 @@ import limen.model.CalibrationPoint;
 import limen.model.ConstantStimuliProcedure;
 import limen.model.ContributedProcedure;
 import limen.model.Ear;
+import limen.model.EarlyResponsePolicy;
 import limen.model.EstimatePlacement;
 import limen.model.ExposureEstimate;
 import limen.model.ForcedChoiceTask;
@@ -281,6 +282,13 @@ public class LimenPackageImpl extends EPackageImpl implements LimenPackage {
 	 * @generated
 	 */
 	private EClass exposureEstimateEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum earlyResponsePolicyEEnum = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -805,6 +813,16 @@ public class LimenPackageImpl extends EPackageImpl implements LimenPackage {
 	@Override
 	public EAttribute getTask_Feedback() {
 		return (EAttribute)taskEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getTask_EarlyResponses() {
+		return (EAttribute)taskEClass.getEStructuralFeatures().get(4);
 	}
 
 	/**
@@ -2343,6 +2361,36 @@ public class LimenPackageImpl extends EPackageImpl implements LimenPackage {
 	 * @generated
 	 */
 	@Override
+	public EAttribute getExposureEstimate_NioshDosePercent() {
+		return (EAttribute)exposureEstimateEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getExposureEstimate_OshaDosePercent() {
+		return (EAttribute)exposureEstimateEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EEnum getEarlyResponsePolicy() {
+		return earlyResponsePolicyEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getOrderingPolicy() {
 		return orderingPolicyEEnum;
 	}
@@ -2555,6 +2603,7 @@ public class LimenPackageImpl extends EPackageImpl implements LimenPackage {
 		createEAttribute(taskEClass, TASK__RESPONSE_WINDOW_SECONDS);
 		createEAttribute(taskEClass, TASK__INTER_TRIAL_INTERVAL_SECONDS);
 		createEAttribute(taskEClass, TASK__FEEDBACK);
+		createEAttribute(taskEClass, TASK__EARLY_RESPONSES);
 		createEOperation(taskEClass, TASK___VALID_TIMING__DIAGNOSTICCHAIN_MAP);
 
 		forcedChoiceTaskEClass = createEClass(FORCED_CHOICE_TASK);
@@ -2733,8 +2782,11 @@ public class LimenPackageImpl extends EPackageImpl implements LimenPackage {
 		createEAttribute(exposureEstimateEClass, EXPOSURE_ESTIMATE__PEAK_LEVEL_DB_SPL);
 		createEAttribute(exposureEstimateEClass, EXPOSURE_ESTIMATE__EQUIVALENT_LEVEL_DB_SPL);
 		createEAttribute(exposureEstimateEClass, EXPOSURE_ESTIMATE__SOUND_ON_SECONDS);
+		createEAttribute(exposureEstimateEClass, EXPOSURE_ESTIMATE__NIOSH_DOSE_PERCENT);
+		createEAttribute(exposureEstimateEClass, EXPOSURE_ESTIMATE__OSHA_DOSE_PERCENT);
 
 		// Create enums
+		earlyResponsePolicyEEnum = createEEnum(EARLY_RESPONSE_POLICY);
 		orderingPolicyEEnum = createEEnum(ORDERING_POLICY);
 		stimulusKindEEnum = createEEnum(STIMULUS_KIND);
 		earEEnum = createEEnum(EAR);
@@ -2894,6 +2946,7 @@ public class LimenPackageImpl extends EPackageImpl implements LimenPackage {
 		initEAttribute(getTask_ResponseWindowSeconds(), ecorePackage.getEDouble(), "responseWindowSeconds", null, 0, 1, Task.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getTask_InterTrialIntervalSeconds(), ecorePackage.getEDouble(), "interTrialIntervalSeconds", null, 0, 1, Task.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getTask_Feedback(), ecorePackage.getEBoolean(), "feedback", null, 0, 1, Task.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getTask_EarlyResponses(), this.getEarlyResponsePolicy(), "earlyResponses", null, 0, 1, Task.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		op = initEOperation(getTask__ValidTiming__DiagnosticChain_Map(), ecorePackage.getEBoolean(), "validTiming", 0, 1, IS_UNIQUE, IS_ORDERED);
 		addEParameter(op, ecorePackage.getEDiagnosticChain(), "diagnostics", 0, 1, IS_UNIQUE, IS_ORDERED);
@@ -3216,8 +3269,14 @@ public class LimenPackageImpl extends EPackageImpl implements LimenPackage {
 		initEAttribute(getExposureEstimate_PeakLevelDbSpl(), ecorePackage.getEDouble(), "peakLevelDbSpl", null, 0, 1, ExposureEstimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getExposureEstimate_EquivalentLevelDbSpl(), ecorePackage.getEDouble(), "equivalentLevelDbSpl", null, 0, 1, ExposureEstimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getExposureEstimate_SoundOnSeconds(), ecorePackage.getEDouble(), "soundOnSeconds", null, 0, 1, ExposureEstimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getExposureEstimate_NioshDosePercent(), ecorePackage.getEDouble(), "nioshDosePercent", null, 0, 1, ExposureEstimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getExposureEstimate_OshaDosePercent(), ecorePackage.getEDouble(), "oshaDosePercent", null, 0, 1, ExposureEstimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		// Initialize enums and add enum literals
+		initEEnum(earlyResponsePolicyEEnum, EarlyResponsePolicy.class, "EarlyResponsePolicy");
+		addEEnumLiteral(earlyResponsePolicyEEnum, EarlyResponsePolicy.IGNORE);
+		addEEnumLiteral(earlyResponsePolicyEEnum, EarlyResponsePolicy.RECORD);
+
 		initEEnum(orderingPolicyEEnum, OrderingPolicy.class, "OrderingPolicy");
 		addEEnumLiteral(orderingPolicyEEnum, OrderingPolicy.FIXED);
 		addEEnumLiteral(orderingPolicyEEnum, OrderingPolicy.SHUFFLED);

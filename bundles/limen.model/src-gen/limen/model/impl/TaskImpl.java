@@ -6,6 +6,7 @@ import java.lang.reflect.InvocationTargetException;
 
 import java.util.Map;
 
+import limen.model.EarlyResponsePolicy;
 import limen.model.LimenPackage;
 import limen.model.Task;
 
@@ -31,6 +32,7 @@ import org.eclipse.emf.ecore.impl.EObjectImpl;
  *   <li>{@link limen.model.impl.TaskImpl#getResponseWindowSeconds <em>Response Window Seconds</em>}</li>
  *   <li>{@link limen.model.impl.TaskImpl#getInterTrialIntervalSeconds <em>Inter Trial Interval Seconds</em>}</li>
  *   <li>{@link limen.model.impl.TaskImpl#isFeedback <em>Feedback</em>}</li>
+ *   <li>{@link limen.model.impl.TaskImpl#getEarlyResponses <em>Early Responses</em>}</li>
  * </ul>
  *
  * @generated
@@ -124,6 +126,26 @@ public abstract class TaskImpl extends EObjectImpl implements Task {
 	 * @ordered
 	 */
 	protected boolean feedback = FEEDBACK_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getEarlyResponses() <em>Early Responses</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getEarlyResponses()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final EarlyResponsePolicy EARLY_RESPONSES_EDEFAULT = EarlyResponsePolicy.IGNORE;
+
+	/**
+	 * The cached value of the '{@link #getEarlyResponses() <em>Early Responses</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getEarlyResponses()
+	 * @generated
+	 * @ordered
+	 */
+	protected EarlyResponsePolicy earlyResponses = EARLY_RESPONSES_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -269,6 +291,29 @@ public abstract class TaskImpl extends EObjectImpl implements Task {
 	 * @generated
 	 */
 	@Override
+	public EarlyResponsePolicy getEarlyResponses() {
+		return earlyResponses;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setEarlyResponses(EarlyResponsePolicy newEarlyResponses) {
+		EarlyResponsePolicy oldEarlyResponses = earlyResponses;
+		earlyResponses = newEarlyResponses == null ? EARLY_RESPONSES_EDEFAULT : newEarlyResponses;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, LimenPackage.TASK__EARLY_RESPONSES, oldEarlyResponses, earlyResponses));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public boolean validTiming(final DiagnosticChain diagnostics, final Map<Object, Object> context) {
 		return limen.model.validation.internal.TaskRules.validTiming(this, diagnostics, context);
 	}
@@ -289,6 +334,8 @@ public abstract class TaskImpl extends EObjectImpl implements Task {
 				return getInterTrialIntervalSeconds();
 			case LimenPackage.TASK__FEEDBACK:
 				return isFeedback();
+			case LimenPackage.TASK__EARLY_RESPONSES:
+				return getEarlyResponses();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -312,6 +359,9 @@ public abstract class TaskImpl extends EObjectImpl implements Task {
 				return;
 			case LimenPackage.TASK__FEEDBACK:
 				setFeedback((Boolean)newValue);
+				return;
+			case LimenPackage.TASK__EARLY_RESPONSES:
+				setEarlyResponses((EarlyResponsePolicy)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -337,6 +387,9 @@ public abstract class TaskImpl extends EObjectImpl implements Task {
 			case LimenPackage.TASK__FEEDBACK:
 				setFeedback(FEEDBACK_EDEFAULT);
 				return;
+			case LimenPackage.TASK__EARLY_RESPONSES:
+				setEarlyResponses(EARLY_RESPONSES_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -357,6 +410,8 @@ public abstract class TaskImpl extends EObjectImpl implements Task {
 				return interTrialIntervalSeconds != INTER_TRIAL_INTERVAL_SECONDS_EDEFAULT;
 			case LimenPackage.TASK__FEEDBACK:
 				return feedback != FEEDBACK_EDEFAULT;
+			case LimenPackage.TASK__EARLY_RESPONSES:
+				return earlyResponses != EARLY_RESPONSES_EDEFAULT;
 		}
 		return super.eIsSet(featureID);
 	}
@@ -394,6 +449,8 @@ public abstract class TaskImpl extends EObjectImpl implements Task {
 		result.append(interTrialIntervalSeconds);
 		result.append(", feedback: ");
 		result.append(feedback);
+		result.append(", earlyResponses: ");
+		result.append(earlyResponses);
 		result.append(')');
 		return result.toString();
 	}

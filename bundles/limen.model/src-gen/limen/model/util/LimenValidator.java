@@ -348,6 +348,8 @@ public class LimenValidator extends EObjectValidator {
 				return validateSessionHeader((SessionHeader)value, diagnostics, context);
 			case LimenPackage.EXPOSURE_ESTIMATE:
 				return validateExposureEstimate((ExposureEstimate)value, diagnostics, context);
+			case LimenPackage.EARLY_RESPONSE_POLICY:
+				return validateEarlyResponsePolicy((EarlyResponsePolicy)value, diagnostics, context);
 			case LimenPackage.ORDERING_POLICY:
 				return validateOrderingPolicy((OrderingPolicy)value, diagnostics, context);
 			case LimenPackage.STIMULUS_KIND:
@@ -1093,6 +1095,15 @@ public class LimenValidator extends EObjectValidator {
 	 */
 	public boolean validateExposureEstimate(ExposureEstimate exposureEstimate, DiagnosticChain diagnostics, Map<Object, Object> context) {
 		return validate_EveryDefaultConstraint(exposureEstimate, diagnostics, context);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public boolean validateEarlyResponsePolicy(EarlyResponsePolicy earlyResponsePolicy, DiagnosticChain diagnostics, Map<Object, Object> context) {
+		return true;
 	}
 
 	/**

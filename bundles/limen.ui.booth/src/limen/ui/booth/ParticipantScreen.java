@@ -28,7 +28,9 @@ import org.eclipse.swt.widgets.Monitor;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Text;
 
+import limen.model.EarlyResponsePolicy;
 import limen.model.SessionStatus;
+import limen.model.Task;
 import limen.procedure.Answer;
 import limen.session.Responder;
 import limen.session.SessionStatusInfo;
@@ -50,7 +52,9 @@ import limen.signal.IntervalMark;
  * {@code t0}; interval i is lit from {@code t0 + onset_i / fs} to {@code t0 + offset_i / fs}, taken from the
  * rendered buffer's {@link CheckedStimulus#intervals()} marks. An answer counts only from the end of the last
  * interval, {@code t_end = t0 + max(offset_i) / fs}; its response time is {@code now - t_end} (the device's output
- * latency is not added). Earlier key presses and clicks are ignored and counted ({@link #earlyResponses()}).
+ * latency is not added). Earlier key presses and clicks are counted ({@link #earlyResponses()}) and, as the step's
+ * {@link Task#getEarlyResponses()} says, ignored (the participant answers after the sound) or taken as the answer and
+ * recorded with a negative response time.
  * <p>
  * Threads: {@link Responder} methods run on the session runner's thread and block there; everything that
  * touches widgets runs on the display thread.
@@ -100,6 +104,7 @@ public final class ParticipantScreen implements Responder {
     private volatile long breakReadyNanos;
     private volatile int feedbackMillis = 700;
     private volatile int earlyResponses;
+    private volatile EarlyResponsePolicy earlyPolicy = EarlyResponsePolicy.IGNORE;
     private volatile boolean pauseAfterAnswer;
     private volatile TrialContext current;
     private final Object breakLock = new Object();
@@ -318,6 +323,16 @@ public final class ParticipantScreen implements Responder {
         accepting = true;
         int rate = trial.sampleRateHz();
         ui(() -> startIndicators(m, rate));
+    }
+
+    /** Learns the trial's task and its step's rule for early responses before the sound starts (runner's thread). */
+    @Override
+    public void trialStarting(TrialContext trial) {
+        // the keys taken during the sound depend on the trial's task: set before the sound starts
+        forcedChoice = trial.plan().forcedChoice();
+        intervalCount = trial.plan().intervals();
+        Task task = trial.step().getTask();
+        earlyPolicy = task == null ? EarlyResponsePolicy.IGNORE : task.getEarlyResponses();
     }
 
     @Override
@@ -551,7 +566,9 @@ public final class ParticipantScreen implements Responder {
         long now = System.nanoTime();
         if (now < answerFromNanos) {
             earlyResponses++;
-            return;
+            if (earlyPolicy != EarlyResponsePolicy.RECORD) {
+                return;
+            }
         }
         accepting = false;
         answers.offer(new Response(a, (now - answerFromNanos) / 1e6));

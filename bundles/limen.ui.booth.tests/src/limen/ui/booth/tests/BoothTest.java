@@ -417,6 +417,67 @@ class BoothTest {
         assertTrue(dispatcher.getKeyDownFilter().isEnabled(), "the workbench's keys stay off after the session");
     }
 
+    /**
+     * A key pressed while the first interval sounds: with the step's default (IGNORE) it is counted but not taken,
+     * the answer after the sound is recorded with a response time of zero or more; with RECORD it is the answer,
+     * recorded with a negative response time (milliseconds before the end of the last interval).
+     */
+    @Test
+    void earlyResponsesAreIgnoredOrRecordedAsTheStepSays() throws Exception {
+        List<JournalRow> ignored = runPressingDuringTheSound(DemoLab.IGNORING, "P-HERON");
+        assertEquals(3, ignored.size());
+        for (JournalRow r : ignored) {
+            assertTrue(r.responseMs() >= 0, "an early press was taken although the step ignores them: " + r);
+        }
+        List<JournalRow> recorded = runPressingDuringTheSound(DemoLab.EARLY, "P-EGRET");
+        assertEquals(3, recorded.size());
+        for (JournalRow r : recorded) {
+            // pressed while interval 1 of 2 sounded: at least the second interval (0.4 s) before the end
+            assertTrue(r.responseMs() < -300, "the early answer is not recorded as early: " + r);
+            assertEquals(1, r.response(), "the early key was interval 1: " + r);
+        }
+    }
+
+    private List<JournalRow> runPressingDuringTheSound(String batteryName, String participant) throws Exception {
+        if (context != null) {
+            context.dispose();
+        }
+        for (org.eclipse.swt.widgets.Control c : shell.getChildren()) {
+            c.dispose();
+        }
+        OperatorConsolePart part = console();
+        part.choose(batteryName, participant, BoothSession.OutputKind.NONE, true);
+        part.acknowledge();
+        part.start();
+        assertNotNull(part.session(), part.status());
+        ParticipantScreen ps = part.screen();
+        ps.setFeedbackMillis(0);
+        int early = 0;
+        long until = System.currentTimeMillis() + 60_000;
+        while (part.lastEnd() == null) {
+            assertTrue(System.currentTimeMillis() < until, "the session did not end");
+            if (!display.readAndDispatch()) {
+                Thread.sleep(2);
+            }
+            if (ps.litInterval() == 0) {
+                ps.keyPressed('1', '1', 0); // the screen's key handler (the posted-key path is tested above)
+                early++;
+                while (ps.litInterval() == 0 && System.currentTimeMillis() < until) {
+                    if (!display.readAndDispatch()) {
+                        Thread.sleep(2);
+                    }
+                }
+            } else if (ps.acceptingAnswers() && ps.currentTrial() != null) {
+                ps.keyPressed('2', '2', 0); // after the sound: taken when the early press was ignored
+                pump(100);
+            }
+        }
+        assertEquals(SessionStatus.COMPLETED, part.lastEnd().status(), part.lastEnd().message());
+        assertEquals(3, early, "presses during the first interval");
+        assertTrue(ps.earlyResponses() >= 3, "early presses counted: " + ps.earlyResponses());
+        return SessionFolder.open(part.lastEnd().folder()).readJournal().rows();
+    }
+
     private static Object nothing(Class<?> type) {
         if (type == boolean.class) {
             return false;

@@ -59,6 +59,28 @@ final class DemoLab {
             </limen:Battery>
             """;
 
+    static final String EARLY = "booth-early.battery";
+    /** The same step without the attribute: early responses ignored (the default). */
+    static final String IGNORING = "booth-early-ignored.battery";
+
+    /** Three 2AFC trials with long intervals whose step takes early responses and records them as early. */
+    static final String EARLY_XML = """
+            <?xml version="1.0" encoding="UTF-8"?>
+            <limen:Battery xmi:version="2.0" xmlns:xmi="http://www.omg.org/XMI" xmlns:xsi="http://www.w3.org/2001/XMLSchema-instance" xmlns:limen="http://limen.dev/model/1.0" schemaVersion="1" title="Harbourside booth demo: early answers are recorded" calibrationFile="harbourside-demo.calibration" ordering="FIXED">
+              <steps id="fd-1000-early" title="Frequency discrimination 1000 Hz (three trials, early answers taken)">
+                <task xsi:type="limen:ForcedChoiceTask" intervalDurationSeconds="0.4" interTrialIntervalSeconds="0.1" feedback="false" earlyResponses="RECORD" intervalCount="2" interStimulusIntervalSeconds="0.3"/>
+                <stimulus standardFrequencyHz="1000.0" rampDurationSeconds="0.02">
+                  <standardLevel xsi:type="limen:AbsoluteLevel" levelDbSpl="60.0"/>
+                </stimulus>
+                <variedQuantity unit="PERCENT" scale="LOG"/>
+                <tracks name="A">
+                  <procedure xsi:type="limen:TransformedUpDownProcedure" startValue="8.0" floorValue="0.05" ceilingValue="20.0" stepMode="MULTIPLICATIVE" downCount="2" upCount="1" initialStep="2.0" minimumStep="1.189" shrinkFactor="0.5" reversalsPerShrink="2" discardedReversals="2"/>
+                  <stoppingRule maximumReversals="20" maximumTrials="3"/>
+                </tracks>
+              </steps>
+            </limen:Battery>
+            """;
+
     private DemoLab() {
     }
 
@@ -68,6 +90,9 @@ final class DemoLab {
         Path battery = workspace.resolve(BATTERY);
         Files.writeString(battery, BATTERY_XML.strip() + "\n");
         Files.writeString(workspace.resolve(TWO_PARTS), TWO_PARTS_XML.strip() + "\n");
+        Files.writeString(workspace.resolve(EARLY), EARLY_XML.strip() + "\n");
+        Files.writeString(workspace.resolve(IGNORING), EARLY_XML.strip().replace(" earlyResponses=\"RECORD\"", "")
+                .replace("early answers are recorded", "early answers are ignored").replace("early answers taken", "early answers ignored") + "\n");
         Path root = Paths.get(System.getProperty("limen.root", "../.."));
         Path cal = root.resolve("examples/harbourside-demo.calibration");
         if (!Files.isRegularFile(cal)) {
