@@ -208,6 +208,21 @@ class SessionViewTest {
         session.exportReport(report);
         assertEquals(1, pdfPages(report), "a one-page report");
         assertTrue(Files.size(report) > 5000);
+        // the same page drawn into an image, kept with the screenshots so that people can look at the layout
+        java.awt.image.BufferedImage page = new java.awt.image.BufferedImage(2 * 595, 2 * 842, java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g = page.createGraphics();
+        g.setRenderingHint(java.awt.RenderingHints.KEY_ANTIALIASING, java.awt.RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(java.awt.RenderingHints.KEY_TEXT_ANTIALIASING, java.awt.RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.scale(2, 2);
+        session.drawReport(g);
+        g.dispose();
+        Path shots = Path.of(System.getProperty("limen.screenshots", "target/screenshots"));
+        Files.createDirectories(shots);
+        javax.imageio.ImageIO.write(page, "png", shots.resolve("session-report-page.png").toFile());
+        for (Path p : figures) {
+            Files.copy(p, shots.resolve("export-" + p.getFileName()), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        }
+        Files.copy(report, shots.resolve("export-report.pdf"), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
     }
 
     /** Parses XML with the JDK's parser, without fetching the SVG 1.1 DTD the document names (no network in tests). */

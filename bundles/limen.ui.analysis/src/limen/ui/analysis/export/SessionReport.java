@@ -2,6 +2,7 @@ package limen.ui.analysis.export;
 
 import java.awt.Color;
 import java.awt.Font;
+import java.awt.Graphics2D;
 import java.awt.Rectangle;
 import java.io.IOException;
 import java.nio.file.Files;
@@ -12,7 +13,6 @@ import java.util.Locale;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.pdf.PDFDocument;
-import org.jfree.pdf.PDFGraphics2D;
 import org.jfree.pdf.Page;
 
 import limen.fit.FitSettings;
@@ -30,6 +30,8 @@ public final class SessionReport {
     public static final int WIDTH = 595;
     public static final int HEIGHT = 842;
     private static final int MARGIN = 40;
+    private static final java.time.format.DateTimeFormatter STARTED = java.time.format.DateTimeFormatter
+            .ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'", Locale.ROOT).withZone(java.time.ZoneOffset.UTC);
 
     private SessionReport() {
     }
@@ -47,17 +49,29 @@ public final class SessionReport {
         doc.setTitle("Limen session report " + refit.folder().getFileName());
         doc.setAuthor("Limen");
         Page page = doc.createPage(new Rectangle(WIDTH, HEIGHT));
-        PDFGraphics2D g = page.getGraphics2D();
+        draw(page.getGraphics2D(), refit, settings, track, fit);
+        byte[] bytes = doc.getPDFBytes();
+        Exports.atomically(file, tmp -> Files.write(tmp, bytes));
+    }
+
+    /**
+     * Draws the page into any Java2D surface of {@link #WIDTH} x {@link #HEIGHT} units (the PDF page, or an
+     * image to look at).
+     */
+    public static void draw(Graphics2D g, SessionRefit refit, FitSettings settings, JFreeChart track, JFreeChart fit) {
         g.setColor(Color.WHITE);
         g.fillRect(0, 0, WIDTH, HEIGHT);
         g.setColor(Color.BLACK);
         int y = MARGIN + 6;
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 15));
-        g.drawString("Session " + refit.participant() + ": " + refit.battery(), MARGIN, y);
-        y += 18;
+        g.drawString("Session of " + refit.participant(), MARGIN, y);
+        y += 16;
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 10));
+        y = wrap(g, refit.battery(), MARGIN, y, 95);
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 9));
         for (String line : new String[] {
-            "folder " + refit.folder().getFileName() + "   started " + (refit.started() == null ? "unknown" : refit.started())
+            "folder " + refit.folder().getFileName() + "   started "
+                    + (refit.started() == null ? "unknown" : STARTED.format(refit.started()))
                     + "   status " + refit.status() + "   journal " + refit.integrity(),
             "fit settings: " + settings,
             refit.skipped() ? "skipped: " + refit.problem() : ""}) {
@@ -96,11 +110,9 @@ public final class SessionReport {
         g.setColor(Color.DARK_GRAY);
         g.setFont(new Font(Font.SANS_SERIF, Font.ITALIC, 8));
         g.drawString("Made with Limen, research software: not a clinical audiometer, not for diagnosis.", MARGIN, HEIGHT - MARGIN + 14);
-        byte[] bytes = doc.getPDFBytes();
-        Exports.atomically(file, tmp -> Files.write(tmp, bytes));
     }
 
-    private static int wrap(PDFGraphics2D g, String text, int x, int y, int columns) {
+    private static int wrap(Graphics2D g, String text, int x, int y, int columns) {
         List<String> lines = new ArrayList<>();
         String rest = text;
         while (rest.length() > columns) {

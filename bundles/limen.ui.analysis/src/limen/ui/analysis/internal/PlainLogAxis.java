@@ -36,7 +36,7 @@ final class PlainLogAxis extends LogAxis {
         double lo = getLowerBound();
         double hi = getUpperBound();
         List ticks = ticks(lo, hi, ONE_TWO_FIVE, edge);
-        if (ticks.size() < 3) {
+        if (ticks.size() < 4) {
             ticks = ticks(lo, hi, EVERY, edge);
         }
         return ticks;

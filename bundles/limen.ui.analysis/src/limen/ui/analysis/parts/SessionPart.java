@@ -571,6 +571,11 @@ public final class SessionPart {
         return out;
     }
 
+    /** Draws the shown session's report page into a Java2D surface (see {@link SessionReport#draw}). */
+    public void drawReport(java.awt.Graphics2D g) {
+        SessionReport.draw(g, shown, shownSettings, trackChart.chart(), fitChart.chart());
+    }
+
     /** Writes the one-page PDF report of the shown session. */
     public void exportReport(Path file) throws IOException {
         if (shown == null) {
