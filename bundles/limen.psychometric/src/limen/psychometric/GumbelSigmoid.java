@@ -2,8 +2,11 @@ package limen.psychometric;
 
 /**
  * F(x) = 1 − exp(−exp((x − M)/S)), the log-Weibull; see {@link Sigmoids#GUMBEL}.
+ * <p>
+ * Public with a public no-argument constructor only so that ServiceLoader and Declarative Services can
+ * contribute it like any lab's family (see {@link Sigmoids#byName}); code uses the constant.
  */
-final class GumbelSigmoid implements Sigmoid {
+public final class GumbelSigmoid implements Sigmoid {
 
     @Override
     public String name() {

@@ -1,7 +1,12 @@
 package limen.psychometric;
 
-/** F(x) = 1 / (1 + exp(−(x − M)/S)); see {@link Sigmoids#LOGISTIC}. */
-final class LogisticSigmoid implements Sigmoid {
+/**
+ * F(x) = 1 / (1 + exp(−(x − M)/S)); see {@link Sigmoids#LOGISTIC}.
+ * <p>
+ * Public with a public no-argument constructor only so that ServiceLoader and Declarative Services can
+ * contribute it like any lab's family (see {@link Sigmoids#byName}); code uses the constant.
+ */
+public final class LogisticSigmoid implements Sigmoid {
 
     @Override
     public String name() {

@@ -6,8 +6,11 @@ import org.apache.commons.math3.special.Erf;
  * F(x) = Φ((x − M)/S) = erfc(−(x − M)/(S√2)) / 2; see {@link Sigmoids#NORMAL}. Uses Commons Math's
  * {@link Erf} (erfc through the regularised incomplete gamma function, so the lower tail keeps
  * its relative accuracy; the inverse through Giles' erfInv approximation).
+ * <p>
+ * Public with a public no-argument constructor only so that ServiceLoader and Declarative Services can
+ * contribute it like any lab's family (see {@link Sigmoids#byName}); code uses the constant.
  */
-final class NormalSigmoid implements Sigmoid {
+public final class NormalSigmoid implements Sigmoid {
 
     private static final double SQRT2 = Math.sqrt(2.0);
     private static final double INV_SQRT_2PI = 1.0 / Math.sqrt(2.0 * Math.PI);

@@ -2,6 +2,9 @@ package limen.psychometric;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
+
+import limen.core.extension.Extensions;
 
 /**
  * The built-in sigmoid families. With z = (x − M)/S:
@@ -35,20 +38,34 @@ public final class Sigmoids {
     }
 
     /**
+     * Looks a family up among the installed ones ({@link Extensions}: the built-ins below and any lab's, each
+     * registered through {@code META-INF/services/limen.psychometric.Sigmoid} and an {@code OSGI-INF}
+     * component). For a built-in the constant of this class is returned, so identity checks against it hold.
+     *
      * @param name a family name, case-insensitive, surrounding blanks ignored
-     * @return the built-in family of that name
-     * @throws IllegalArgumentException for an unknown name, listing the known ones
+     * @return the installed family of that name
+     * @throws IllegalArgumentException for an unknown name, listing the installed ones
      */
     public static Sigmoid byName(String name) {
         if (name != null) {
             String key = name.trim().toLowerCase(Locale.ROOT);
-            for (Sigmoid s : BUILT_INS) {
-                if (s.name().equals(key)) {
-                    return s;
+            Optional<Sigmoid> found = Extensions.find(Sigmoid.class, key, Sigmoid::name);
+            if (found.isPresent()) {
+                for (Sigmoid s : BUILT_INS) {
+                    if (s.getClass() == found.get().getClass()) {
+                        return s;
+                    }
                 }
+                return found.get();
             }
         }
-        throw new IllegalArgumentException("unknown psychometric family '" + name + "'; known: logistic, normal, weibull, gumbel");
+        throw new IllegalArgumentException("unknown psychometric family '" + name + "'; installed: "
+                + Extensions.ids(Sigmoid.class, Sigmoid::name));
+    }
+
+    /** @return every installed family, built-in or contributed, in the registry's order (unmodifiable) */
+    public static List<Sigmoid> installed() {
+        return Extensions.all(Sigmoid.class);
     }
 
     /** @return the built-in families in the order logistic, normal, weibull, gumbel (unmodifiable) */

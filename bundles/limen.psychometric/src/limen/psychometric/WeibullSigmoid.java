@@ -4,8 +4,11 @@ package limen.psychometric;
  * F(x) = 1 − exp(−(x/A)^B) for x &gt; 0, 0 for x &le; 0; see {@link Sigmoids#WEIBULL}. The location
  * is the scale A (alpha, F(A) = 1 − 1/e) and the "spread" slot holds the shape B (beta), which
  * grows as the function steepens.
+ * <p>
+ * Public with a public no-argument constructor only so that ServiceLoader and Declarative Services can
+ * contribute it like any lab's family (see {@link Sigmoids#byName}); code uses the constant.
  */
-final class WeibullSigmoid implements Sigmoid {
+public final class WeibullSigmoid implements Sigmoid {
 
     @Override
     public String name() {

@@ -2,22 +2,25 @@ package limen.session;
 
 import java.util.random.RandomGenerator;
 
-import limen.model.AbsoluteLevel;
+import limen.core.extension.Extensions;
 import limen.model.ForcedChoiceTask;
-import limen.model.MaskerNoise;
 import limen.model.Step;
 import limen.model.StimulusKind;
 import limen.model.Task;
 import limen.procedure.TrialPlan;
+import limen.session.build.ModelSettings;
 import limen.signal.Ear;
-import limen.signal.NoiseSpectrum;
 import limen.signal.Sound;
 import limen.signal.Stimulus;
+import limen.signal.StimulusDesign;
 import limen.signal.StimulusRenderer;
 import limen.signal.TrialSpec;
+import limen.signal.designs.FrequencyDiscriminationDesign;
 
 /**
- * Renders a battery step's trial at a given value with {@link StimulusRenderer}:
+ * Renders a battery step's trial at a given value with {@link StimulusRenderer}. The sounds come from the
+ * step's {@link StimulusDesign}, the one extension point for stimulus kinds; the built-in designs
+ * ({@code limen.signal.designs}) are:
  * <ul>
  * <li>frequency discrimination: standard tone f0, target f0 + Δf with Δf from the value and its unit
  * (Hz: f0 + v; percent: f0 (1 + v/100); cents: f0 · 2^(v/1200)), both at the standard level;</li>
@@ -46,48 +49,30 @@ public final class BatteryTrialRenderer implements TrialRenderer {
         return renderer.renderTrial(spec(step, plan, standardLevelDbSpl), rng);
     }
 
-    /** The layout of one trial (separate for tests and previews). */
+    /**
+     * The layout of one trial (separate for tests and previews): the step's stimulus design (found among the
+     * installed ones, see {@link ModelSettings#stimulusId}) gives the standard and target sounds; this method
+     * lays them out as nAFC intervals or a single yes/no interval, in the step's ear.
+     *
+     * @throws IllegalArgumentException naming the step when its design is not installed or cannot render
+     */
     public static TrialSpec spec(Step step, TrialPlan plan, double standardLevelDbSpl) {
         limen.model.Stimulus st = step.getStimulus();
         Task task = step.getTask();
-        double f0 = st.getStandardFrequencyHz();
-        double duration = task.getIntervalDurationSeconds();
-        double ramp = st.getRampDurationSeconds();
-        double v = plan.value();
-        StimulusKind kind = st.getKind();
-        Sound standard;
-        Sound target;
-        switch (kind) {
-        case FREQUENCY_DISCRIMINATION -> {
-            standard = new Sound.Tone(f0, standardLevelDbSpl, duration, ramp);
-            target = new Sound.Tone(comparisonFrequency(step, v), standardLevelDbSpl, duration, ramp);
+        if (st.getContributions().isEmpty() && st.getKind() == StimulusKind.DETECTION_NOISE && st.getMasker() == null) {
+            throw new IllegalArgumentException("step " + step.getId() + ": detection in noise needs a masker");
         }
-        case INTENSITY_DISCRIMINATION -> {
-            standard = new Sound.Tone(f0, standardLevelDbSpl, duration, ramp);
-            target = new Sound.Tone(f0, standardLevelDbSpl + v, duration, ramp);
+        StimulusDesign.IntervalSounds sounds;
+        try {
+            StimulusDesign design = installedDesign(ModelSettings.stimulusId(step));
+            sounds = design.design(ModelSettings.stimulusSettings(step),
+                    new StimulusDesign.Presentation(plan.value(), standardLevelDbSpl, task.getIntervalDurationSeconds()));
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("step " + step.getId() + ": " + e.getMessage(), e);
         }
-        case DETECTION_QUIET, DETECTION_NOISE -> {
-            standard = new Sound.Silence(duration);
-            target = new Sound.Tone(f0, v, duration, ramp);
-        }
-        default -> throw new IllegalArgumentException("step " + step.getId() + ": stimulus kind " + kind
-                + " cannot be rendered");
-        }
-        TrialSpec.Background background = null;
-        double lead = LEAD_SECONDS;
-        if (kind == StimulusKind.DETECTION_NOISE) {
-            MaskerNoise m = st.getMasker();
-            if (m == null) {
-                throw new IllegalArgumentException("step " + step.getId() + ": detection in noise needs a masker");
-            }
-            double maskerLevel = m.getLevel() instanceof AbsoluteLevel a ? a.getLevelDbSpl() : standardLevelDbSpl;
-            NoiseSpectrum.Shape shape = m.getSpectrum() == limen.model.NoiseSpectrum.PINK ? NoiseSpectrum.Shape.PINK
-                    : NoiseSpectrum.Shape.FLAT;
-            double maskerRamp = Math.max(ramp, 0.02);
-            lead = Math.max(lead, maskerRamp + 0.1);
-            background = new TrialSpec.Background(new NoiseSpectrum(shape, m.getLowCutoffHz(), m.getHighCutoffHz(),
-                    Double.NaN, Double.NaN), maskerLevel, maskerRamp);
-        }
+        Sound standard = sounds.standard();
+        Sound target = sounds.target();
+        double lead = Math.max(LEAD_SECONDS, sounds.leadSeconds());
         Ear ear = switch (st.getEar()) {
         case LEFT -> Ear.LEFT;
         case RIGHT -> Ear.RIGHT;
@@ -96,21 +81,30 @@ public final class BatteryTrialRenderer implements TrialRenderer {
         if (plan.forcedChoice()) {
             double isi = task instanceof ForcedChoiceTask fc ? fc.getInterStimulusIntervalSeconds() : 0.3;
             return new TrialSpec(plan.intervals(), plan.targetInterval(), standard, target, lead, isi, TRAIL_SECONDS, ear,
-                    background);
+                    sounds.background());
         }
         Sound only = plan.catchTrial() ? standard : target;
-        return new TrialSpec(1, 0, only, only, lead, 0, TRAIL_SECONDS, ear, background);
+        return new TrialSpec(1, 0, only, only, lead, 0, TRAIL_SECONDS, ear, sounds.background());
+    }
+
+    /**
+     * @param id a stimulus design's identifier
+     * @return the installed design
+     * @throws IllegalArgumentException naming the identifier and the installed designs when none has it
+     */
+    public static StimulusDesign installedDesign(String id) {
+        return Extensions.find(StimulusDesign.class, id, StimulusDesign::id).orElseThrow(() -> new IllegalArgumentException(
+                "stimulus design '" + id + "' is not installed (installed designs: " + Extensions.ids(StimulusDesign.class,
+                        StimulusDesign::id) + "); add the extension that provides it"));
     }
 
     /** The comparison frequency of a frequency-discrimination step at value {@code v}. */
     public static double comparisonFrequency(Step step, double v) {
-        double f0 = step.getStimulus().getStandardFrequencyHz();
-        return switch (step.getVariedQuantity().getUnit()) {
-        case HZ -> f0 + v;
-        case PERCENT -> f0 * (1 + v / 100.0);
-        case CENTS -> f0 * Math.pow(2, v / 1200.0);
-        default -> throw new IllegalArgumentException("step " + step.getId() + ": frequency discrimination varies Hz, "
-                + "percent or cents, not " + step.getVariedQuantity().getUnit());
-        };
+        try {
+            return FrequencyDiscriminationDesign.comparisonFrequency(step.getStimulus().getStandardFrequencyHz(),
+                    step.getVariedQuantity().getUnit().getName(), v);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("step " + step.getId() + ": " + e.getMessage(), e);
+        }
     }
 }

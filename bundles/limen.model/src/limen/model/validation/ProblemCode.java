@@ -180,6 +180,12 @@ public enum ProblemCode {
     SETTING_NAME_BLANK(803, Severity.ERROR, "A contributor id or setting name is blank."),
     /** Values of a contributed procedure cannot be checked here. */
     CONTRIBUTED_NOT_CHECKED(804, Severity.WARNING, "Values of a contributed procedure cannot be checked here."),
+    /** The procedure or stimulus design a settings group names is not installed. */
+    CONTRIBUTION_NOT_INSTALLED(805, Severity.ERROR, "The procedure or stimulus design a settings group names is not installed."),
+    /** The installed contributor refuses the settings it is given. */
+    CONTRIBUTION_REFUSED(806, Severity.ERROR, "The installed contributor refuses the settings it is given."),
+    /** A stimulus holds more than one contributed design. */
+    STIMULUS_CONTRIBUTIONS_MANY(807, Severity.ERROR, "A stimulus holds more than one contributed design."),
     /** The file is not well-formed XML (truncated, garbage, wrong encoding). */
     MALFORMED_FILE(901, Severity.ERROR, "The file is not well-formed XML (truncated, garbage, wrong encoding)."),
     /** An unknown element or attribute was kept as it is. */

@@ -7,10 +7,13 @@ import java.util.Map;
 
 import org.eclipse.emf.common.util.DiagnosticChain;
 
+import limen.core.extension.Extensions;
 import limen.model.LimenPackage.Literals;
 import limen.model.Setting;
 import limen.model.SettingType;
 import limen.model.SettingsGroup;
+import limen.model.Stimulus;
+import limen.model.validation.ContributionCheck;
 import limen.model.validation.ProblemCode;
 
 /** Invariants of {@link SettingsGroup}: names and typed values of contributed settings. */
@@ -19,7 +22,11 @@ public final class SettingsRules {
     private SettingsRules() {
     }
 
-    /** LM0803 blank contributor or name, LM0801 duplicate names, LM0802 values that do not parse. */
+    /**
+     * LM0803 blank contributor or name, LM0801 duplicate names, LM0802 values that do not parse; then, when the
+     * syntax is sound and a {@link ContributionCheck} is installed, LM0805 (contributor not installed) and LM0806
+     * (it refuses the settings); LM0807 for a second design on one stimulus.
+     */
     public static boolean validSettings(SettingsGroup group, DiagnosticChain diagnostics,
             Map<Object, Object> context) {
         boolean ok = true;
@@ -44,6 +51,22 @@ public final class SettingsRules {
                 ok &= report(diagnostics, ProblemCode.SETTING_VALUE_TYPE, setting, Literals.SETTING__VALUE,
                         setting.getValue(), Labels.of(setting) + ": value '" + setting.getValue() + "' is not of type "
                                 + setting.getType());
+            }
+        }
+        if (group.eContainer() instanceof Stimulus stimulus && stimulus.getContributions().indexOf(group) > 0) {
+            ok &= report(diagnostics, ProblemCode.STIMULUS_CONTRIBUTIONS_MANY, group,
+                    Literals.SETTINGS_GROUP__CONTRIBUTOR_ID, group.getContributorId(), Labels.of(stimulus)
+                            + ": only one contributed design can render a stimulus; '" + group.getContributorId()
+                            + "' comes after '" + stimulus.getContributions().get(0).getContributorId() + "'");
+        }
+        if (ok && group.getContributorId() != null) {
+            for (ContributionCheck check : Extensions.all(ContributionCheck.class)) {
+                ContributionCheck.Finding finding = check.check(group);
+                if (finding != null) {
+                    ok &= report(diagnostics, finding.installed() ? ProblemCode.CONTRIBUTION_REFUSED
+                            : ProblemCode.CONTRIBUTION_NOT_INSTALLED, group, Literals.SETTINGS_GROUP__CONTRIBUTOR_ID,
+                            group.getContributorId(), Labels.of(group.eContainer()) + ": " + finding.message());
+                }
             }
         }
         return ok;
