@@ -12,11 +12,10 @@ import java.util.concurrent.Callable;
 
 import limen.fit.CancellationFlag;
 import limen.fit.FitSettings;
-import limen.fit.Progress;
 import limen.session.ArchiveIndex;
+import limen.session.refit.BatchRefitter;
 import limen.session.refit.RefitTable;
 import limen.session.refit.SessionRefit;
-import limen.session.refit.SessionRefitter;
 import limen.session.refit.TrackFit;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -26,8 +25,9 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code ./limen refit PATH... --out FILE.csv}: refits stored sessions after the fact, one CSV row per
- * session, step and track, by {@link SessionRefitter} (the same code as the workbench). Sessions are read one
- * at a time and their rows written as they are done, so memory does not grow with the archive.
+ * session, step and track, by {@link limen.session.refit.SessionRefitter} (the same code as the workbench),
+ * several sessions at once ({@link BatchRefitter}); rows are written in the order the sessions were found as
+ * soon as each is done, and only a few sessions are held at a time, so memory does not grow with the archive.
  */
 @Command(name = "refit", mixinStandardHelpOptions = true,
         description = {"Refit stored sessions (session folders, or archive folders searched recursively): pool each",
@@ -86,7 +86,8 @@ public final class RefitCommand implements Callable<Integer> {
     @Option(names = "--nonparametric", description = "resample the observed proportions instead of the fitted function")
     boolean nonparametric;
 
-    @Option(names = "--threads", paramLabel = "T", description = "worker threads of the bootstrap (default: all cores)")
+    @Option(names = "--threads", paramLabel = "T",
+            description = "worker threads: sessions are refitted in parallel, results do not depend on it (default: all cores)")
     Integer threads;
 
     @Override
@@ -117,49 +118,54 @@ public final class RefitCommand implements Callable<Integer> {
             err.println("limen refit: no sessions under " + paths);
             return LimenCli.EXIT_USAGE;
         }
-        SessionRefitter refitter = new SessionRefitter(settings);
+        List<Path> folders = new java.util.ArrayList<>(total);
+        found.forEach(folders::addAll);
+        int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+        BatchRefitter refitter = new BatchRefitter(settings, workers);
         RefitTable table = new RefitTable(settings);
         CancellationFlag cancel = new CancellationFlag();
         long t0 = System.nanoTime();
-        int done = 0;
-        int skipped = 0;
-        int tracks = 0;
-        int failed = 0;
+        int[] counts = new int[4]; // done, skipped, tracks fitted, tracks not fitted
+        int all = total;
         try (BufferedWriter w = Files.newBufferedWriter(out, StandardCharsets.UTF_8)) {
             table.writeHeader(w);
-            for (List<Path> group : found) {
-                for (Path folder : group) {
-                    SessionRefit r = refitter.refit(folder, Progress.NONE, cancel);
-                    table.write(w, r);
-                    w.flush();
-                    done++;
-                    if (r.skipped()) {
-                        skipped++;
-                        err.println("limen refit: [" + done + "/" + total + "] " + folder + ": skipped (integrity "
-                                + r.integrity() + "): " + r.problem());
-                    } else {
-                        long ok = r.tracks().stream().filter(t -> t.outcome() == TrackFit.Outcome.FITTED).count();
-                        tracks += ok;
-                        failed += r.tracks().size() - ok;
-                        err.println("limen refit: [" + done + "/" + total + "] " + folder + ": " + ok + " of " + r.tracks().size()
-                                + " tracks fitted" + (r.integrity().equals("OK") ? "" : " (integrity " + r.integrity() + ")"));
-                        for (TrackFit t : r.tracks()) {
-                            if (t.outcome() != TrackFit.Outcome.FITTED) {
-                                err.println("limen refit: warning: " + folder + " step " + t.data().stepId() + " track "
-                                        + t.data().track() + ": " + t.outcome().name().toLowerCase(Locale.ROOT) + ": " + t.message());
-                            }
-                        }
-                    }
-                    err.flush();
-                }
-            }
+            // sessions are refitted in parallel; rows arrive here in folder order and are written at once
+            refitter.refit(folders, r -> {
+                table.write(w, r);
+                w.flush();
+                report(err, r, ++counts[0], all, counts);
+            }, cancel);
         } catch (IOException e) {
             err.println("limen refit: " + out + ": cannot write: " + e.getMessage());
             return LimenCli.EXIT_FAILED;
         }
         double seconds = (System.nanoTime() - t0) / 1e9;
+        int skipped = counts[1];
         err.println(String.format(Locale.ROOT, "limen refit: %d sessions, %d tracks fitted, %d not fitted, %d sessions skipped, %.2f s -> %s",
-                done, tracks, failed, skipped, seconds, out));
+                counts[0], counts[2], counts[3], skipped, seconds, out));
         return skipped > 0 ? LimenCli.EXIT_FAILED : 0;
+    }
+
+    /** Progress and problems of one session on stderr; counts[1..3] += skipped, tracks fitted, not fitted. */
+    private static void report(PrintWriter err, SessionRefit r, int done, int total, int[] counts) {
+        Path folder = r.folder();
+        if (r.skipped()) {
+            counts[1]++;
+            err.println("limen refit: [" + done + "/" + total + "] " + folder + ": skipped (integrity "
+                    + r.integrity() + "): " + r.problem());
+        } else {
+            long ok = r.tracks().stream().filter(t -> t.outcome() == TrackFit.Outcome.FITTED).count();
+            counts[2] += (int) ok;
+            counts[3] += r.tracks().size() - (int) ok;
+            err.println("limen refit: [" + done + "/" + total + "] " + folder + ": " + ok + " of " + r.tracks().size()
+                    + " tracks fitted" + (r.integrity().equals("OK") ? "" : " (integrity " + r.integrity() + ")"));
+            for (TrackFit t : r.tracks()) {
+                if (t.outcome() != TrackFit.Outcome.FITTED) {
+                    err.println("limen refit: warning: " + folder + " step " + t.data().stepId() + " track "
+                            + t.data().track() + ": " + t.outcome().name().toLowerCase(Locale.ROOT) + ": " + t.message());
+                }
+            }
+        }
+        err.flush();
     }
 }

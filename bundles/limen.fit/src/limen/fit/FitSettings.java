@@ -198,6 +198,23 @@ public final class FitSettings {
         return nonparametric;
     }
 
+    /** @return bootstrap worker threads, 0 for one per available processor */
+    public int threads() {
+        return threads;
+    }
+
+    /**
+     * @param t bootstrap worker threads, &ge; 1 (results do not depend on it)
+     * @return a copy with that many
+     */
+    public FitSettings withThreads(int t) {
+        if (t < 1) {
+            throw new IllegalArgumentException("threads must be >= 1, was " + t);
+        }
+        return new FitSettings(sigmoid, guessMode, fixedGuess, lapseMax, fixedLapse, targetPsi, targetF, bootstrapSamples,
+                seed, intervalMethod, level, nonparametric, t);
+    }
+
     /** @return a one-line summary of every setting, e.g. for a file beside saved fits */
     @Override
     public String toString() {

@@ -11,8 +11,9 @@ import limen.procedure.internal.PsiTables;
  * posterior entropy after presenting candidate c is
  * E[H_c] = H(w) − [h(Σ_θ w p_c) − Σ_θ w h(p_c)], with h(p) = −p ln p − (1 − p) ln(1 − p), which
  * equals p̄ H(w | correct) + (1 − p̄) H(w | wrong) expanded (the bracket is the mutual information
- * of the response and θ). So one pass over a precomputed table of (p_c, h(p_c)) per candidate and
- * point finds the candidate with the least expected entropy (the first on ties).
+ * of the response and θ). So one pass over precomputed tables finds the candidate with the least expected
+ * entropy (the first on ties): h(p_c) per candidate and point, and, since p_c is affine in the lapse rate,
+ * F per candidate and (threshold, spread) for Σ_θ w p_c (see {@code PsiTables}).
  * <p>
  * The estimate is the marginal posterior mean of α with its SD; {@link #spreadEstimate()} and
  * {@link #lapseEstimate()} give the other marginals.

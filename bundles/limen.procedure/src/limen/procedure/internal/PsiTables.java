@@ -3,13 +3,22 @@ package limen.procedure.internal;
 import limen.psychometric.Sigmoid;
 
 /**
- * Precomputed ψ and binary-entropy tables of the Psi method, point-major: for parameter point
- * θ = (α, β, λ) and candidate c, {@code table[θ·2C + c] = ψ(x_c; θ)} and
- * {@code table[θ·2C + C + c] = h(ψ)} with h(p) = −p ln p − (1 − p) ln(1 − p), in single precision so
- * one selection streams at most 8 bytes per (candidate, point). One pass over the points adds
- * w(θ)·ψ and w(θ)·h into 2C double-precision accumulators (independent per candidate, so the inner
- * loops vectorise); points whose posterior weight is below 1e-14 are skipped, which changes every sum
- * by less than 1e-14 per point while the posterior concentrates.
+ * Precomputed tables of the Psi method's trial selection. The selection needs, for each candidate x_c,
+ * Σ_θ w(θ) ψ(x_c; θ) and Σ_θ w(θ) h(ψ(x_c; θ)) over the parameter points θ = (α, β, λ), with
+ * h(p) = −p ln p − (1 − p) ln(1 − p). Since ψ = γ + (1 − γ − λ) F(x; α, β) is affine in λ,
+ * <pre>
+ *   Σ_θ w ψ_c = γ Σ_θ w + Σ_(α,β) F_c(α, β) [(1 − γ) W(α, β) − Λ(α, β)],
+ *   W(α, β) = Σ_λ w(α, β, λ),   Λ(α, β) = Σ_λ w(α, β, λ) λ,
+ * </pre>
+ * so the first sum needs only one table of F per (α, β) and candidate (n_λ times smaller); only the entropy
+ * sum needs every point. Tables, in single precision, candidate-minor:
+ * {@code f[(iα·nβ + iβ)·C + c] = F(x_c; α, β)} and {@code h[θ·C + c] = h(ψ(x_c; θ))}, θ in the
+ * posterior's order ((iα·nβ) + iβ)·nλ + iλ. One selection therefore streams (n_α n_β + n_α n_β n_λ) · C
+ * floats ({@link #floatsPerSelection()}) instead of 2 · n_α n_β n_λ · C, into 2C double accumulators
+ * (independent per candidate, so the inner loops vectorise). Points whose posterior weight is below 1e-14
+ * are skipped in both sums (and left out of W and Λ), which changes every sum by less than 1e-14 per point
+ * while the posterior concentrates. The likelihood update ({@link #multiplyLikelihood}) works in double
+ * precision from the sigmoid itself.
  */
 public final class PsiTables {
 
@@ -19,8 +28,12 @@ public final class PsiTables {
     private final double[] spreads;
     private final double[] lapses;
     private final int points;
+    private final int pairs;
     private final int candidates;
-    private final float[] table;
+    /** F(x_c; α, β), per (α, β) a row of C. */
+    private final float[] f;
+    /** h(ψ(x_c; θ)), per point θ a row of C. */
+    private final float[] h;
 
     private PsiTables(Sigmoid sigmoid, double guess, double[] thresholds, double[] spreads, double[] lapses,
             double[] candidateValues) {
@@ -29,15 +42,20 @@ public final class PsiTables {
         this.thresholds = thresholds;
         this.spreads = spreads;
         this.lapses = lapses;
-        this.points = thresholds.length * spreads.length * lapses.length;
+        this.pairs = thresholds.length * spreads.length;
+        this.points = pairs * lapses.length;
         this.candidates = candidateValues.length;
-        this.table = new float[Math.multiplyExact(candidates, 2 * points)];
-        double[] psi = new double[points];
+        this.f = new float[Math.multiplyExact(candidates, pairs)];
+        this.h = new float[Math.multiplyExact(candidates, points)];
+        int nL = lapses.length;
         for (int c = 0; c < candidates; c++) {
-            fillPsi(candidateValues[c], psi);
-            for (int k = 0; k < points; k++) {
-                table[k * 2 * candidates + c] = (float) psi[k];
-                table[k * 2 * candidates + candidates + c] = (float) binaryEntropy(psi[k]);
+            double x = candidateValues[c];
+            for (int ab = 0; ab < pairs; ab++) {
+                double fx = sigmoid.value(x, thresholds[ab / spreads.length], spreads[ab % spreads.length]);
+                f[ab * candidates + c] = (float) fx;
+                for (int k = 0; k < nL; k++) {
+                    h[(ab * nL + k) * candidates + c] = (float) binaryEntropy(guess + (1 - guess - lapses[k]) * fx);
+                }
             }
         }
     }
@@ -85,30 +103,53 @@ public final class PsiTables {
     /** Posterior weights below this are skipped in the selection pass. */
     static final double NEGLIGIBLE_WEIGHT = 1e-14;
 
+    /** @return floats of the tables that one selection streams when no point is negligible: (n_α n_β + n_α n_β n_λ) · C */
+    public long floatsPerSelection() {
+        return (long) (pairs + points) * candidates;
+    }
+
     /**
      * @param w the posterior (normalised), length {@link #points()}
      * @return for each candidate the mutual information h(Σ w p_c) − Σ w h(p_c) in nats
      */
     public double[] informationGains(double[] w) {
         final int nc = candidates;
-        final float[] t = table;
-        final int row = 2 * nc;
-        // acc[0..C) sums w·ψ, acc[C..2C) sums w·h(ψ): one contiguous row per point, one vectorisable loop
-        double[] acc = new double[row];
-        for (int k = 0, base = 0; k < points; k++, base += row) {
-            double wk = w[k];
-            if (wk < NEGLIGIBLE_WEIGHT) {
+        final int nL = lapses.length;
+        final float[] ft = f;
+        final float[] ht = h;
+        final double g = guess;
+        double[] accPsi = new double[nc];
+        double[] accH = new double[nc];
+        double total = 0;
+        for (int ab = 0, k = 0; ab < pairs; ab++) {
+            double wSum = 0;
+            double lambdaSum = 0;
+            for (int l = 0; l < nL; l++, k++) {
+                double wk = w[k];
+                if (wk < NEGLIGIBLE_WEIGHT) {
+                    continue;
+                }
+                wSum += wk;
+                lambdaSum += wk * lapses[l];
+                for (int c = 0, base = k * nc; c < nc; c++) {
+                    accH[c] += wk * ht[base + c];
+                }
+            }
+            if (wSum == 0) {
                 continue;
             }
-            for (int j = 0; j < row; j++) {
-                acc[j] += wk * t[base + j];
+            total += wSum;
+            double u = (1 - g) * wSum - lambdaSum;
+            for (int c = 0, base = ab * nc; c < nc; c++) {
+                accPsi[c] += u * ft[base + c];
             }
         }
-        double[] g = new double[nc];
+        double[] gain = new double[nc];
         for (int c = 0; c < nc; c++) {
-            g[c] = binaryEntropy(Math.min(Math.max(acc[c], 0), 1)) - acc[nc + c];
+            double meanPsi = g * total + accPsi[c];
+            gain[c] = binaryEntropy(Math.min(Math.max(meanPsi, 0), 1)) - accH[c];
         }
-        return g;
+        return gain;
     }
 
     /** @return the candidate index of the largest information gain (least expected entropy), the first on ties */
