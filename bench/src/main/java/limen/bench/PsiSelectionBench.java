@@ -24,11 +24,15 @@ import limen.psychometric.Sigmoids;
 
 /**
  * One Psi-method trial selection (Kontsevich &amp; Tyler 1999) on 100 thresholds × 40 spreads × 5 lapse rates
- * = 20,000 parameter points and 61 candidate values: one pass over the precomputed (ψ, h(ψ)) table,
- * 61 × 20,000 × 2 floats = 9.8 MB (at the prior every point counts; later, points of negligible
- * posterior weight are skipped). The baseline streams a float array of the same size and layout through the
- * same accumulators without the weights: the memory-bandwidth floor of any single pass over that table. Sample mode, so JMH prints
- * the median (p0.50) beside the mean; one thread.
+ * = 20,000 parameter points and 61 candidate values: one pass over the precomputed tables
+ * ({@link PsiTables}): h(ψ) for every point and candidate (61 × 20,000 floats) and, because ψ is affine in
+ * the lapse rate, F for every (threshold, spread) pair and candidate (61 × 4,000 floats), 5.86 MB in all
+ * (the former single (ψ, h(ψ)) table was 9.8 MB). At the prior every point counts; later, points of
+ * negligible posterior weight are skipped. The baseline streams a float array of exactly
+ * {@link PsiTables#floatsPerSelection()} floats in the same layout (per pair, 5 rows of 61 into one set of
+ * 61 double accumulators, then one row of 61 into another) without the weights: the memory-bandwidth floor
+ * of any single pass over those tables. Sample mode, so JMH prints the median (p0.50) beside the mean; one
+ * thread.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SampleTime)
@@ -43,6 +47,7 @@ public class PsiSelectionBench {
     private double[] posterior;
     private double[] prior;
     private float[] sameBytes;
+    private int lapseCount;
 
     @Setup
     public void setUp() {
@@ -67,7 +72,8 @@ public class PsiSelectionBench {
         }
         posterior = psi.posterior();
         tables = PsiTables.of(Sigmoids.LOGISTIC, 0.5, thresholds, spreads, lapses, candidates);
-        sameBytes = new float[tables.candidates() * tables.points() * 2];
+        sameBytes = new float[Math.toIntExact(tables.floatsPerSelection())];
+        lapseCount = lapses.length;
         for (int i = 0; i < sameBytes.length; i++) {
             sameBytes[i] = (float) rng.nextDouble();
         }
@@ -82,22 +88,31 @@ public class PsiSelectionBench {
     }
 
     /**
-     * The same bytes in the same layout (rows of 2 × 61 floats, one per parameter point) added into the
-     * same 122 double accumulators, without the posterior weight: the cost of one pass over the table.
+     * The same number of bytes in the same layout as the selection reads (per (threshold, spread) pair, one
+     * row of 61 floats for each lapse rate, added into 61 double accumulators, then one row of 61 into 61
+     * others), without the posterior weights: the cost of one pass over the tables.
      */
     @Benchmark
     public double baselineStreamSameBytes() {
         final float[] a = sameBytes;
-        final int row = 2 * tables.candidates();
-        double[] acc = new double[row];
-        for (int base = 0; base < a.length; base += row) {
-            for (int j = 0; j < row; j++) {
-                acc[j] += a[base + j];
+        final int nc = tables.candidates();
+        final int nL = lapseCount;
+        double[] accA = new double[nc];
+        double[] accB = new double[nc];
+        for (int base = 0; base < a.length;) {
+            for (int l = 0; l < nL; l++, base += nc) {
+                for (int c = 0; c < nc; c++) {
+                    accA[c] += a[base + c];
+                }
             }
+            for (int c = 0; c < nc; c++) {
+                accB[c] += a[base + c];
+            }
+            base += nc;
         }
         double s = 0;
-        for (double v : acc) {
-            s += v;
+        for (int c = 0; c < nc; c++) {
+            s += accA[c] + accB[c];
         }
         return s;
     }
