@@ -13,6 +13,11 @@ public final class AnalysisIds {
     public static final String SUMMARY_PART = "limen.ui.analysis.part.summary";
     /** Event topic: the browser's selection changed; data is a {@code List<Path>} of session folders. */
     public static final String SELECTION_TOPIC = "limen/analysis/selection";
+    /**
+     * Key of the browser's selection ({@code List<Path>}) in the application's context, for views created
+     * after the selection was posted (a tab opened later).
+     */
+    public static final String SELECTION_KEY = "limen.ui.analysis.selection";
     /** Event topic: fits of these session folders were saved; data is a {@code List<Path>}. */
     public static final String FITS_SAVED_TOPIC = "limen/analysis/fitsSaved";
 

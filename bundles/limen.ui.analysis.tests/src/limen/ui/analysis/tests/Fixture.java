@@ -20,6 +20,8 @@ import org.eclipse.e4.core.contexts.ContextInjectionFactory;
 import org.eclipse.e4.core.contexts.EclipseContextFactory;
 import org.eclipse.e4.core.contexts.IEclipseContext;
 import org.eclipse.e4.core.services.events.IEventBroker;
+import org.eclipse.e4.ui.model.application.MApplication;
+import org.eclipse.e4.ui.model.application.MApplicationFactory;
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Display;
@@ -60,6 +62,10 @@ final class Fixture implements AutoCloseable {
         shell.setSize(width, height);
         context = EclipseContextFactory.create("test " + title);
         context.set(IEventBroker.class, broker);
+        // the application model element whose context holds the browser's selection for views opened later
+        MApplication app = MApplicationFactory.INSTANCE.createApplication();
+        app.setContext(context);
+        context.set(MApplication.class, app);
     }
 
     /** Runs a headless command in this JVM; returns its stderr; fails the test on a non-zero exit. */

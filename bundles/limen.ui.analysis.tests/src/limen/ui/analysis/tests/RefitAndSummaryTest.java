@@ -132,6 +132,20 @@ class RefitAndSummaryTest {
     }
 
     @Test
+    void viewsOpenedLaterPickUpTheSelection() throws Exception {
+        browser.select(all());
+        Composite extra = new Composite(fx.shell, SWT.NONE);
+        SummaryPart later = fx.make(SummaryPart.class, extra);
+        later.setBootstrap(0, 1);
+        RefitJob job = later.summarise();
+        assertNotNull(job, "the summary opened after the selection knows it");
+        assertEquals(all(), job.folders());
+        assertTrue(fx.pumpUntil(() -> !later.running(), 120_000));
+        assertEquals(12, later.points().size());
+        later.dispose();
+    }
+
+    @Test
     void summaryShowsRelativeDifferenceLimensByStandardFrequency() throws Exception {
         browser.select(all());
         summary.setBootstrap(60, 4);

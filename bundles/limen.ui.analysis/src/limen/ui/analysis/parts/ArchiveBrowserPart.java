@@ -23,6 +23,7 @@ import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
+import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.IStructuredSelection;
@@ -78,6 +79,10 @@ public final class ArchiveBrowserPart {
     private int sortColumn = 2;
     private int sortDirection = 1;
     private Display display;
+
+    @Inject
+    @Optional
+    MApplication app;
 
     @PostConstruct
     public void create(Composite parent) {
@@ -160,8 +165,12 @@ public final class ArchiveBrowserPart {
             }
         });
         table.addSelectionChangedListener(e -> {
+            List<Path> chosen = selection();
+            if (app != null) {
+                app.getContext().set(AnalysisIds.SELECTION_KEY, chosen);
+            }
             if (broker != null) {
-                broker.post(AnalysisIds.SELECTION_TOPIC, selection());
+                broker.post(AnalysisIds.SELECTION_TOPIC, chosen);
             }
         });
         table.setInput(List.of());

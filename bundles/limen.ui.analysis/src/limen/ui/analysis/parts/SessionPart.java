@@ -16,6 +16,7 @@ import org.eclipse.core.runtime.jobs.JobChangeAdapter;
 import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
+import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.e4.ui.di.UIEventTopic;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
@@ -109,9 +110,10 @@ public final class SessionPart {
     private FitSettings lastSettings;
     private final List<String> progressSeen = Collections.synchronizedList(new ArrayList<>());
     private String problem = "";
+    private boolean displayPending;
 
     @PostConstruct
-    public void create(Composite parent) {
+    public void create(Composite parent, @Optional MApplication app) {
         display = parent.getDisplay();
         parent.setLayout(new GridLayout(1, false));
         title = new Label(parent, SWT.NONE);
@@ -123,7 +125,8 @@ public final class SessionPart {
 
         Composite form = new Composite(parent, SWT.NONE);
         form.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        GridLayout fl = new GridLayout(14, false);
+        // two rows of settings, so that the form fits the workbench's default window
+        GridLayout fl = new GridLayout(8, false);
         fl.marginHeight = 0;
         form.setLayout(fl);
         function = combo(form, "Function", FUNCTIONS, "The sigmoid F of psi = guess + (1 - guess - lapse) F(x)");
@@ -184,12 +187,14 @@ public final class SessionPart {
         fitChart = new ChartCanvas(charts);
         fitChart.setPlaceholder("The psychometric fit of the selected track");
         Composite bottom = new Composite(sash, SWT.NONE);
-        bottom.setLayout(new GridLayout(2, false));
+        bottom.setLayout(new GridLayout(1, false));
         numbers = new Text(bottom, SWT.MULTI | SWT.READ_ONLY | SWT.BORDER | SWT.V_SCROLL | SWT.WRAP);
         numbers.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         Composite exports = new Composite(bottom, SWT.NONE);
-        exports.setLayoutData(new GridData(SWT.FILL, SWT.FILL, false, true));
-        exports.setLayout(new GridLayout(1, true));
+        exports.setLayoutData(new GridData(SWT.FILL, SWT.BOTTOM, true, false));
+        GridLayout el = new GridLayout(5, false);
+        el.marginHeight = 0;
+        exports.setLayout(el);
         button(exports, "Export trials CSV...", "Tidy table of every trial of the selected sessions", () -> {
             Path f = saveDialog("trials.csv", "*.csv");
             if (f != null) {
@@ -216,11 +221,14 @@ public final class SessionPart {
                 report(() -> exportReport(f), "Report written to " + f);
             }
         });
-        savedLabel = new Label(exports, SWT.WRAP);
-        GridData sl = new GridData(SWT.FILL, SWT.TOP, true, false);
-        sl.widthHint = 170;
-        savedLabel.setLayoutData(sl);
+        savedLabel = new Label(exports, SWT.NONE);
+        savedLabel.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
         sash.setWeights(21, 55, 24);
+        if (app != null && app.getContext().get(AnalysisIds.SELECTION_KEY) instanceof List<?> earlier) {
+            @SuppressWarnings("unchecked")
+            List<Path> folders = (List<Path>) earlier;
+            show(folders);
+        }
     }
 
     private static Combo combo(Composite parent, String label, String[] items, String tip) {
@@ -326,14 +334,18 @@ public final class SessionPart {
         RefitJob job = new RefitJob(List.of(folder), s, false, true);
         job.setUser(false);
         shownJob = job;
+        displayPending = true;
         job.addJobChangeListener(new JobChangeAdapter() {
             @Override
             public void done(IJobChangeEvent event) {
                 display.asyncExec(() -> {
-                    if (job == shownJob && !title.isDisposed() && !job.cancelled() && !job.results().isEmpty()) {
-                        display(job, job.results().get(0));
-                        lastResults = job.results();
-                        lastSettings = job.settings();
+                    if (job == shownJob && !title.isDisposed()) {
+                        displayPending = false;
+                        if (!job.cancelled() && !job.results().isEmpty()) {
+                            display(job, job.results().get(0));
+                            lastResults = job.results();
+                            lastSettings = job.settings();
+                        }
                     }
                 });
             }
@@ -436,9 +448,9 @@ public final class SessionPart {
         return batchJob != null;
     }
 
-    /** @return whether the shown session's fit is being computed */
+    /** @return whether the shown session's fit is being computed (or its result not yet shown) */
     public boolean fitting() {
-        return shownJob != null && shownJob.getState() != org.eclipse.core.runtime.jobs.Job.NONE;
+        return displayPending;
     }
 
     /** @return the progress texts the view showed during the last batch refit */

@@ -16,6 +16,7 @@ import org.eclipse.core.runtime.jobs.JobChangeAdapter;
 import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
+import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.e4.ui.di.UIEventTopic;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
@@ -68,7 +69,7 @@ public final class SummaryPart {
     private RefitJob job;
 
     @PostConstruct
-    public void create(Composite parent) {
+    public void create(Composite parent, @Optional MApplication app) {
         display = parent.getDisplay();
         parent.setLayout(new GridLayout(1, false));
         Composite row = new Composite(parent, SWT.NONE);
@@ -126,6 +127,11 @@ public final class SummaryPart {
         table.setContentProvider(ArrayContentProvider.getInstance());
         table.setInput(points);
         sash.setWeights(68, 32);
+        if (app != null && app.getContext().get(AnalysisIds.SELECTION_KEY) instanceof List<?> earlier) {
+            @SuppressWarnings("unchecked")
+            List<Path> folders = (List<Path>) earlier;
+            select(folders);
+        }
     }
 
     private static String cell(ConditionSummary.Point p, int column) {
