@@ -22,6 +22,7 @@ import org.eclipse.e4.core.contexts.IEclipseContext;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.model.application.MApplication;
 import org.eclipse.e4.ui.model.application.MApplicationFactory;
+import org.eclipse.e4.ui.model.application.ui.basic.MPart;
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Display;
@@ -97,8 +98,16 @@ final class Fixture implements AutoCloseable {
     }
 
     <T> T make(Class<T> type, Composite parent) {
+        return make(type, parent, null);
+    }
+
+    /** Makes a view as the workbench does for a part (with the part's model element when given). */
+    <T> T make(Class<T> type, Composite parent, MPart part) {
         IEclipseContext child = context.createChild(type.getSimpleName());
         child.set(Composite.class, parent);
+        if (part != null) {
+            child.set(MPart.class, part);
+        }
         return ContextInjectionFactory.make(type, child);
     }
 

@@ -18,6 +18,8 @@ import java.util.regex.Pattern;
 import javax.xml.parsers.DocumentBuilderFactory;
 
 import org.apache.commons.csv.CSVRecord;
+import org.eclipse.e4.ui.model.application.ui.basic.MBasicFactory;
+import org.eclipse.e4.ui.model.application.ui.basic.MPart;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
 import org.eclipse.swt.graphics.ImageData;
@@ -111,6 +113,22 @@ class SessionViewTest {
         Screenshots.save(fx.shell, "archive-browser-two-archives");
         browser.removeArchive(second);
         assertEquals(2, browser.visible().size());
+    }
+
+    @Test
+    void openArchivesAreRememberedInThePartsState() throws Exception {
+        MPart part = MBasicFactory.INSTANCE.createPart();
+        Path second = Files.createDirectories(temp.resolve("second"));
+        ArchiveBrowserPart first = fx.make(ArchiveBrowserPart.class, new Composite(fx.shell, SWT.NONE), part);
+        assertEquals(List.of(fx.archive), first.archives(), "first start: the workspace folder");
+        first.addArchive(second);
+        first.removeArchive(fx.archive);
+        assertTrue(fx.pumpUntil(() -> !first.scanning(), 30_000));
+        assertEquals(second.toString(), part.getPersistedState().get(ArchiveBrowserPart.ARCHIVES_KEY));
+        ArchiveBrowserPart again = fx.make(ArchiveBrowserPart.class, new Composite(fx.shell, SWT.NONE), part);
+        assertEquals(List.of(second), again.archives(), "the next start opens what was open");
+        assertTrue(fx.pumpUntil(() -> !again.scanning(), 30_000));
+        assertEquals(0, again.visible().size());
     }
 
     @Test

@@ -24,6 +24,7 @@ import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.core.services.events.IEventBroker;
 import org.eclipse.e4.ui.di.Focus;
 import org.eclipse.e4.ui.model.application.MApplication;
+import org.eclipse.e4.ui.model.application.ui.basic.MPart;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.IStructuredSelection;
@@ -54,8 +55,9 @@ import limen.ui.analysis.SessionEntry;
 /**
  * The archive browser: the sessions of every open archive folder as one table (participant, battery, start
  * date, status, verified trials, journal integrity), sorted by clicking a column, filtered by text typed
- * above it. Archives are added and removed with the buttons; at start the workspace folder the workbench
- * was started on and the archive folder of the preferences are opened (when they exist). Each archive is
+ * above it. Archives are added and removed with the buttons and remembered in the part's persisted state;
+ * on a first start the workspace folder the workbench was started on and the archive folder of the
+ * preferences are opened (when they exist). Each archive is
  * scanned in a background job. The selection (one or several sessions) is posted on
  * {@link AnalysisIds#SELECTION_TOPIC}.
  */
@@ -83,6 +85,13 @@ public final class ArchiveBrowserPart {
     @Inject
     @Optional
     MApplication app;
+
+    @Inject
+    @Optional
+    MPart part;
+
+    /** Persisted-state key of the part: the open archive folders, one absolute path per line. */
+    public static final String ARCHIVES_KEY = "limen.ui.analysis.archives";
 
     @PostConstruct
     public void create(Composite parent) {
@@ -176,9 +185,18 @@ public final class ArchiveBrowserPart {
         table.setInput(List.of());
         showSort();
 
-        // by default: the lab's workspace folder (./limen starts on examples/) and the archive of the preferences
-        LimenPreferences prefs = LimenPreferences.open();
-        for (Path p : new Path[] {prefs.workspaceFolder(), prefs.archiveFolder()}) {
+        // the archives open when the workbench last closed, or by default the lab's workspace folder (./limen
+        // starts on examples/) and the archive folder of the preferences
+        String remembered = part == null ? null : part.getPersistedState().get(ARCHIVES_KEY);
+        List<Path> start = new ArrayList<>();
+        if (remembered != null) {
+            remembered.lines().filter(l -> !l.isBlank()).map(Path::of).forEach(start::add);
+        } else {
+            LimenPreferences prefs = LimenPreferences.open();
+            start.add(prefs.workspaceFolder());
+            start.add(prefs.archiveFolder());
+        }
+        for (Path p : start) {
             if (Files.isDirectory(p)) {
                 addArchive(p.toAbsolutePath().normalize());
             }
@@ -265,6 +283,9 @@ public final class ArchiveBrowserPart {
     }
 
     private void refreshArchives() {
+        if (part != null) {
+            part.getPersistedState().put(ARCHIVES_KEY, String.join("\n", archives.keySet().stream().map(Path::toString).toList()));
+        }
         archiveList.removeAll();
         for (Map.Entry<Path, List<SessionEntry>> e : archives.entrySet()) {
             archiveList.add(e.getKey() + "  (" + e.getValue().size() + " sessions)");
