@@ -114,6 +114,19 @@ class RefitAndSummaryTest {
         assertTrue(fx.pumpUntil(() -> !session.running(), 300_000));
         assertEquals(2, SavedFits.list(all().get(0)).size());
         assertArrayEquals(before, Files.readAllBytes(first));
+
+        // the first saved fit shown again: its settings in the form, its rows in the view
+        Path shownFolder = session.shown().folder();
+        assertEquals(2, session.savedFits().size());
+        SavedFits.SavedFit saved = SavedFits.read(session.savedFits().get(0));
+        assertNotNull(session.showSavedFit(0));
+        assertTrue(fx.pumpUntil(() -> !session.fitting(), 120_000));
+        assertEquals(shownFolder, session.shown().folder());
+        assertEquals(saved.settings().toString(), session.settings().toString(), "the form holds the saved settings");
+        for (int i = 0; i < saved.rows().size(); i++) {
+            session.selectTrack(i);
+            assertEquals(saved.rows().get(i), session.shownRow(), "track " + i);
+        }
     }
 
     @Test

@@ -97,6 +97,8 @@ public final class SessionPart {
     private ChartCanvas fitChart;
     private Text numbers;
     private Label savedLabel;
+    private Combo savedFits;
+    private List<Path> savedPaths = List.of();
     private Font bold;
 
     private List<Path> selection = List.of();
@@ -223,6 +225,14 @@ public final class SessionPart {
         });
         savedLabel = new Label(exports, SWT.NONE);
         savedLabel.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        savedFits = new Combo(exports, SWT.READ_ONLY);
+        savedFits.setToolTipText("Fits saved beside the shown session (file names carry the time, UTC)");
+        GridData sf = new GridData(SWT.LEFT, SWT.CENTER, false, false);
+        sf.widthHint = 230;
+        savedFits.setLayoutData(sf);
+        button(exports, "Show saved fit", "Fit the shown session again with the chosen saved fit's settings and seed (the same numbers)",
+                () -> showSavedFit(savedFits.getSelectionIndex()));
+        ((GridLayout) exports.getLayout()).numColumns = 7;
         sash.setWeights(21, 55, 24);
         if (app != null && app.getContext().get(AnalysisIds.SELECTION_KEY) instanceof List<?> earlier) {
             @SuppressWarnings("unchecked")
@@ -326,6 +336,10 @@ public final class SessionPart {
             fail(e.getMessage());
             return null;
         }
+        return fitShown(folder, s);
+    }
+
+    private RefitJob fitShown(Path folder, FitSettings s) {
         if (shownJob != null) {
             shownJob.cancel();
         }
@@ -481,12 +495,41 @@ public final class SessionPart {
         }
         try {
             List<Path> saved = SavedFits.list(shown.folder());
-            savedLabel.setText(saved.isEmpty() ? "No saved fits yet."
-                    : saved.size() + " saved fit" + (saved.size() == 1 ? "" : "s") + "; latest " + saved.get(saved.size() - 1).getFileName());
+            savedPaths = saved;
+            savedLabel.setText(saved.isEmpty() ? "No saved fits yet." : saved.size() + " saved fit" + (saved.size() == 1 ? ":" : "s:"));
+            savedFits.setItems(saved.stream().map(p -> p.getFileName().toString()).toArray(String[]::new));
+            savedFits.select(saved.size() - 1);
         } catch (IOException e) {
             savedLabel.setText("Saved fits unreadable: " + e.getMessage());
         }
         savedLabel.getParent().layout();
+    }
+
+    /**
+     * Shows the shown session fitted with the settings of one of its saved fits (0-based, oldest first): the
+     * fit is deterministic for its settings and seed, so the numbers are those saved; the form takes the
+     * settings.
+     */
+    public RefitJob showSavedFit(int index) {
+        if (shown == null || index < 0 || index >= savedPaths.size()) {
+            return null;
+        }
+        FitSettings s;
+        try {
+            s = SavedFits.read(savedPaths.get(index)).settings();
+        } catch (IOException e) {
+            fail(e.getMessage());
+            return null;
+        }
+        setSettings(s.sigmoid().name(), s.guessText(), Double.toString(s.lapseMax()),
+                Double.isNaN(s.targetPsi()) ? "" : Double.toString(s.targetPsi()), s.bootstrapSamples(), s.seed(),
+                s.intervalMethod().name().toLowerCase(Locale.ROOT));
+        return fitShown(shown.folder(), s);
+    }
+
+    /** @return the saved fits of the shown session, oldest first */
+    public List<Path> savedFits() {
+        return savedPaths;
     }
 
     /** Shows one track of the shown session (0-based, in the table's order). */
