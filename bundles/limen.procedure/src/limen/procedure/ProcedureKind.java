@@ -1,5 +1,7 @@
 package limen.procedure;
 
+import java.util.Optional;
+
 import limen.core.extension.Settings;
 
 /**
@@ -39,4 +41,16 @@ public interface ProcedureKind {
      * @throws IllegalArgumentException naming the setting and its value when the settings cannot run
      */
     ProcedureFactory create(Settings settings, ProcedureContext context);
+
+    /**
+     * A model listener for design-time simulation when the author names none, as a
+     * {@code limen.psychometric.ListenerSpec} in the quantity's unit, placed where these settings expect the
+     * threshold (Limen's own kinds follow {@code limen.session.build.DefaultListeners}).
+     *
+     * @param settings the track's settings
+     * @return the spec, or empty (the default) when the kind offers none: the author must then give one
+     */
+    default Optional<String> defaultListener(Settings settings) {
+        return Optional.empty();
+    }
 }

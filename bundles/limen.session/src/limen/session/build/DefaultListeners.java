@@ -3,6 +3,7 @@ package limen.session.build;
 import java.util.Locale;
 
 import limen.model.ConstantStimuliProcedure;
+import limen.model.ContributedProcedure;
 import limen.model.PestProcedure;
 import limen.model.Procedure;
 import limen.model.PsiProcedure;
@@ -28,7 +29,8 @@ import limen.model.WeightedUpDownProcedure;
  * with its lapse δ(1 − γ);</li>
  * <li>Psi: the procedure's family at the middle of the threshold grid with the geometric middle slope
  * (on a LOG axis a Weibull in x of matching spread);</li>
- * <li>constant stimuli: logistic at the middle of the value range, scale an eighth of the range.</li>
+ * <li>constant stimuli: logistic at the middle of the value range, scale an eighth of the range;</li>
+ * <li>a contributed procedure: what its kind offers ({@code ProcedureKind.defaultListener}), if anything.</li>
  * </ul>
  */
 public final class DefaultListeners {
@@ -87,6 +89,15 @@ public final class DefaultListeners {
             }
             double range = hi > lo ? hi - lo : Math.max(Math.abs(hi), 1);
             return "logistic:mid=" + num((lo + hi) / 2) + ",scale=" + num(range / 8);
+        }
+        if (p instanceof ContributedProcedure c) {
+            String id = ModelSettings.procedureId(c);
+            java.util.Optional<String> offered = ProcedureBuilder.installedKind(id).defaultListener(ModelSettings.of(c));
+            if (offered.isPresent()) {
+                return offered.get();
+            }
+            throw new IllegalArgumentException("step " + step.getId() + ", track " + track.getName()
+                    + ": procedure '" + id + "' offers no default listener; give --listener");
         }
         throw new IllegalArgumentException("step " + step.getId() + ", track " + track.getName()
                 + ": no default listener for this procedure; give --listener");

@@ -19,9 +19,12 @@ import org.eclipse.swt.widgets.Label;
 
 import limen.model.Battery;
 import limen.model.Break;
+import limen.model.ContributedProcedure;
 import limen.model.ForcedChoiceTask;
 import limen.model.LimenPackage.Literals;
 import limen.model.RelativeLevel;
+import limen.model.Setting;
+import limen.model.SettingsGroup;
 import limen.model.Step;
 import limen.model.Track;
 import limen.model.YesNoTask;
@@ -186,11 +189,17 @@ public final class SettingsForm {
                     add(out, "Masker", s.getStimulus().getMasker());
                     add(out, "Masker level", s.getStimulus().getMasker().getLevel());
                 }
+                for (SettingsGroup g : s.getStimulus().getContributions()) {
+                    addGroup(out, "Stimulus design", g);
+                }
             }
             add(out, "Varied quantity", s.getVariedQuantity());
         } else if (e instanceof Track t) {
             add(out, "Track", t);
             add(out, "Procedure: " + ElementLabels.procedure(t.getProcedure()), t.getProcedure());
+            if (t.getProcedure() instanceof ContributedProcedure c) {
+                addGroup(out, "Procedure settings", c.getSettings());
+            }
             add(out, "Stopping rule", t.getStoppingRule());
         }
         return out;
@@ -210,6 +219,21 @@ public final class SettingsForm {
             features.add(0, Literals.RELATIVE_LEVEL__REFERENCE);
         }
         out.add(new Section(title, owner, features));
+    }
+
+    /**
+     * A contributed procedure's or stimulus design's generic settings: the group (its contributor id) and one
+     * section per entry (name, value, type), edited like any other field; the contributor judges the values
+     * through the validator (LM0805, LM0806).
+     */
+    private static void addGroup(List<Section> out, String title, SettingsGroup group) {
+        if (group == null) {
+            return;
+        }
+        add(out, title, group);
+        for (Setting setting : group.getEntries()) {
+            add(out, "Setting", setting);
+        }
     }
 
     private static List<Object> signatureOf(List<Section> sections) {

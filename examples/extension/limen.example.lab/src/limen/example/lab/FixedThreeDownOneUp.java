@@ -1,5 +1,7 @@
 package limen.example.lab;
 
+import java.util.Optional;
+
 import limen.core.extension.Settings;
 import limen.procedure.ProcedureContext;
 import limen.procedure.ProcedureFactory;
@@ -49,5 +51,16 @@ public final class FixedThreeDownOneUp implements ProcedureKind {
                 .limits(settings.real("floorValue"), settings.real("ceilingValue")).additive(step).rule(3, 1)
                 .threshold(settings.integer("discardedReversals", 2), settings.integer("averagedReversals", 0))
                 .stop(context.stopRule()).build();
+    }
+
+    /**
+     * For a simulation without a named listener: a logistic with its midpoint four steps below the start (never
+     * below the floor) and a scale of one step, the rule Limen uses for its own additive staircases.
+     */
+    @Override
+    public Optional<String> defaultListener(Settings settings) {
+        double step = settings.real("stepSize");
+        double mid = Math.max(settings.real("startValue") - 4 * step, settings.real("floorValue"));
+        return Optional.of("logistic:mid=" + mid + ",scale=" + step);
     }
 }

@@ -140,6 +140,15 @@ class ExampleExtensionTest {
     }
 
     @Test
+    void withoutAListenerTheProcedureOffersItsOwnDefault(@TempDir Path tmp) throws Exception {
+        ChildCli.Result sim = new ChildCli(withExtension, tmp).run("simulate", battery.toString(), "--runs", "20",
+                "--out", tmp.resolve("sim.csv").toString());
+        assertEquals(0, sim.exit(), sim.toString());
+        // four 2 dB steps below the start of 40 dB SPL, scale one step
+        assertTrue(sim.err().contains("track A: listener logistic:mid=32.0,scale=2.0"), sim.toString());
+    }
+
+    @Test
     void theContributedSettingsAreSavedAndLoadedLikeBuiltInOnes(@TempDir Path tmp) throws IOException {
         Battery b = LimenFiles.loadBattery(battery);
         Path copy = tmp.resolve("copy.battery");
