@@ -228,7 +228,7 @@ public final class SessionPart {
         savedFits = new Combo(exports, SWT.READ_ONLY);
         savedFits.setToolTipText("Fits saved beside the shown session (file names carry the time, UTC)");
         GridData sf = new GridData(SWT.LEFT, SWT.CENTER, false, false);
-        sf.widthHint = 230;
+        sf.widthHint = 270;
         savedFits.setLayoutData(sf);
         button(exports, "Show saved fit", "Fit the shown session again with the chosen saved fit's settings and seed (the same numbers)",
                 () -> showSavedFit(savedFits.getSelectionIndex()));
