@@ -20,7 +20,8 @@ import limen.fit.Progress;
  * order of the folders given, so that a caller can stream them into a table. Sessions, not bootstrap
  * replicates, are the unit of parallel work here (a batch has many, and each carries its own reading,
  * verifying and fitting); when there are fewer sessions than threads the remaining threads go to each
- * bootstrap. At most {@link #window()} results are held at once, so memory does not grow with the archive.
+ * bootstrap. At most {@link #window()} results are held or in work at once, so memory does not grow with the
+ * archive.
  * <p>
  * Results do not depend on the number of threads: every track's bootstrap uses the settings' seed with one
  * generator per replicate ({@link limen.fit.BootstrapOptions}), exactly as {@link SessionRefitter} alone.
@@ -48,10 +49,16 @@ public final class BatchRefitter {
         this.threads = threads;
     }
 
-    /** @return results held at most: two per worker thread (one being written while the next is fitted) */
+    /**
+     * @return results held at most: {@value #WINDOW_PER_THREAD} per worker thread, so that one slow session (a
+     *         near-step track whose replicates need the full search) does not leave the other workers idle
+     *         while its row is awaited; each held result is a few tens of kilobytes
+     */
     public int window() {
-        return 2 * threads;
+        return WINDOW_PER_THREAD * threads;
     }
+
+    private static final int WINDOW_PER_THREAD = 16;
 
     /**
      * Refits {@code folders} and passes each result to {@code sink} in the same order.
