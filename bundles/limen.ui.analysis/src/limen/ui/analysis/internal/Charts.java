@@ -213,8 +213,11 @@ public final class Charts {
                 // the threshold's bootstrap interval as a bar at the target proportion
                 ConfidenceInterval ci = t.bootstrap() == null ? null : t.bootstrap().thresholdInterval(method);
                 if (ci != null && ci.isDefined()) {
-                    XYSeries bar = new XYSeries(String.format(Locale.ROOT, "threshold %.0f%% interval", ci.level() * 100), false, true);
-                    bar.add(ci.lower(), f.targetPsi());
+                    // on a log axis an interval reaching zero or below cannot be drawn: cut it at the axis and say so
+                    boolean cut = log && !(ci.lower() > 0);
+                    XYSeries bar = new XYSeries(String.format(Locale.ROOT, "threshold %.0f%% interval", ci.level() * 100)
+                            + (cut ? String.format(Locale.ROOT, " (lower end %.3g, cut at the axis)", ci.lower()) : ""), false, true);
+                    bar.add(cut ? logAxisLow(cells, f, ci) : ci.lower(), f.targetPsi());
                     bar.add(ci.upper(), f.targetPsi());
                     XYLineAndShapeRenderer br = new XYLineAndShapeRenderer(true, true);
                     br.setSeriesPaint(0, REVERSAL);
@@ -235,7 +238,32 @@ public final class Charts {
             plot.addRangeMarker(label(new ValueMarker(f.targetPsi(), LINE, dashed()),
                     String.format(Locale.ROOT, "target %.3g", f.targetPsi()), true));
         }
+        if (log) {
+            // a log axis spans the positive data and the threshold only; a bound at or below zero must not stretch it
+            ConfidenceInterval ci = f == null || t.bootstrap() == null ? null : t.bootstrap().thresholdInterval(method);
+            double low = logAxisLow(cells, f, ci);
+            double high = cells.values()[cells.size() - 1];
+            if (f != null && Double.isFinite(f.threshold()) && f.threshold() > 0) {
+                high = Math.max(high, f.threshold());
+            }
+            if (ci != null && ci.isDefined() && ci.upper() > 0 && Double.isFinite(ci.upper())) {
+                high = Math.max(high, ci.upper());
+            }
+            plot.getDomainAxis().setRange(low, high * 1.25);
+        }
         return styled("Psychometric fit, step " + d.stepId() + " track " + d.track(), plot, true);
+    }
+
+    /** Lower end of a log value axis: below the smallest positive value, threshold and interval bound shown. */
+    private static double logAxisLow(BinomialData cells, FitResult f, ConfidenceInterval ci) {
+        double low = cells.values()[0];
+        if (f != null && Double.isFinite(f.threshold()) && f.threshold() > 0) {
+            low = Math.min(low, f.threshold());
+        }
+        if (ci != null && ci.isDefined() && ci.lower() > 0) {
+            low = Math.min(low, ci.lower());
+        }
+        return low / 1.25;
     }
 
     /**
