@@ -138,16 +138,20 @@ class SessionRefitterTest {
         SessionRefit r = new SessionRefitter(s).refit(f.path(), Progress.NONE, new CancellationFlag());
         List<JournalRow> rows = f.readJournal().rows();
         for (TrackFit t : r.tracks()) {
-            // pool independently of TrackData: a sorted map from value to (trials, correct)
-            TreeMap<Double, int[]> cells = new TreeMap<>();
+            // pool independently of TrackData: values equal to 9 significant digits are one level (additive steps
+            // of 0.1 give 0.2 and 0.20000000000000018 along two paths); the cell keeps its smallest recorded value
+            TreeMap<java.math.BigDecimal, int[]> cells = new TreeMap<>();
+            TreeMap<java.math.BigDecimal, Double> smallest = new TreeMap<>();
             for (JournalRow j : rows) {
                 if (j.step().equals(t.data().stepId()) && j.track().equals(t.data().track()) && !j.catchTrial()) {
-                    int[] c = cells.computeIfAbsent(j.value(), v -> new int[2]);
+                    java.math.BigDecimal level = new java.math.BigDecimal(j.value()).round(new java.math.MathContext(9));
+                    int[] c = cells.computeIfAbsent(level, v -> new int[2]);
                     c[0]++;
                     c[1] += j.correct() ? 1 : 0;
+                    smallest.merge(level, j.value(), Math::min);
                 }
             }
-            double[] v = cells.keySet().stream().mapToDouble(Double::doubleValue).toArray();
+            double[] v = smallest.values().stream().mapToDouble(Double::doubleValue).toArray();
             int[] n = cells.values().stream().mapToInt(c -> c[0]).toArray();
             int[] k = cells.values().stream().mapToInt(c -> c[1]).toArray();
             BinomialData data = new BinomialData(v, n, k);
@@ -222,6 +226,28 @@ class SessionRefitterTest {
         assertEquals("BROKEN_CHAIN", row.get(RefitTable.COLUMNS.indexOf("integrity")));
         assertEquals("skipped", row.get(RefitTable.COLUMNS.indexOf("outcome")));
         assertTrue(row.get(RefitTable.COLUMNS.indexOf("message")).contains("BROKEN_CHAIN"));
+    }
+
+    /**
+     * One level reached along two paths of a multiplicative staircase: 8 · 2^-1 · 1.189^-3 and 8 · 1.189^-3 · 2^-1
+     * are the same level, but their floating-point products can differ in the last digit (IEEE 754 rounding of each
+     * product). Pooling makes one cell of them; a level a real step away stays its own cell.
+     */
+    @Test
+    void poolingMergesValuesThatDifferOnlyByRounding() {
+        double a = 0.5949143382517145;
+        double b = Math.nextUp(a);
+        assertTrue(b != a);
+        double c = a * 1.189; // one step of the staircase above
+        TrackData t = new TrackData("fd-500", 1, "A", "PERCENT", 0.5, true, 0, new double[] {a, b, c, b, a},
+                new boolean[] {true, false, true, true, true}, 0, 0);
+        limen.fit.BinomialData cells = t.pooled();
+        assertEquals(2, cells.size(), "cells " + java.util.Arrays.toString(cells.values()));
+        assertEquals(a, cells.value(0), 0);
+        assertEquals(4, cells.trials(0));
+        assertEquals(3, cells.correct(0));
+        assertEquals(c, cells.value(1), 0);
+        assertEquals(1, cells.trials(1));
     }
 
     @Test

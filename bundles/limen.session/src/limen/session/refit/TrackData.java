@@ -53,9 +53,15 @@ public record TrackData(String stepId, int stepIndex, String track, String unit,
         return values.length;
     }
 
+    /** Relative difference below which two recorded values are one stimulus level (rounding, not design). */
+    public static final double SAME_LEVEL_RELATIVE = 1e-9;
+
     /**
-     * Pools the signal trials by value: one cell per distinct value (exact equality), in increasing order of
-     * value, with its trial and correct counts.
+     * Pools the signal trials by value: one cell per stimulus level, in increasing order of value, with its trial
+     * and correct counts. Values within {@link #SAME_LEVEL_RELATIVE} of the cell's smallest value are one level:
+     * a multiplicative staircase reaches a level along different paths whose products differ only by rounding
+     * (e.g. 0.5949143382517145 and 0.5949143382517146), and splitting them would make two cells of one level
+     * (and, in near-step data, a spurious ridge for the fit). The cell keeps the smallest value.
      *
      * @throws IllegalArgumentException when the track has no signal trials
      */
@@ -74,14 +80,19 @@ public record TrackData(String stepId, int stepIndex, String track, String unit,
         double[] v = new double[cells.size()];
         int[] n = new int[v.length];
         int[] k = new int[v.length];
-        int i = 0;
+        int i = -1;
         for (Map.Entry<Double, int[]> e : cells.entrySet()) {
-            v[i] = e.getKey();
-            n[i] = e.getValue()[0];
-            k[i] = e.getValue()[1];
-            i++;
+            double x = e.getKey();
+            if (i < 0 || Math.abs(x - v[i]) > SAME_LEVEL_RELATIVE * Math.max(Math.abs(x), Math.abs(v[i]))) {
+                i++;
+                v[i] = x;
+            }
+            n[i] += e.getValue()[0];
+            k[i] += e.getValue()[1];
         }
-        return new BinomialData(v, n, k);
+        int size = i + 1;
+        return new BinomialData(java.util.Arrays.copyOf(v, size), java.util.Arrays.copyOf(n, size),
+                java.util.Arrays.copyOf(k, size));
     }
 
     /** @return the indices (into {@link #values()}) of the track's reversals, see {@link Reversals#indices} */
