@@ -54,7 +54,7 @@ import limen.ui.analysis.AnalysisIds;
 import limen.ui.analysis.RefitJob;
 import limen.ui.analysis.export.Exports;
 import limen.ui.analysis.export.SessionReport;
-import limen.ui.analysis.internal.ChartCanvas;
+import limen.ui.charts.ChartCanvas;
 import limen.ui.analysis.internal.Charts;
 
 /**

@@ -42,7 +42,7 @@ import limen.ui.StatusLine;
 import limen.ui.analysis.AnalysisIds;
 import limen.ui.analysis.RefitJob;
 import limen.ui.analysis.export.Exports;
-import limen.ui.analysis.internal.ChartCanvas;
+import limen.ui.charts.ChartCanvas;
 import limen.ui.analysis.internal.Charts;
 
 /**

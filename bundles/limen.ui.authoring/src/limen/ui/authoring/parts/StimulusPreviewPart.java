@@ -46,8 +46,8 @@ import limen.ui.authoring.AuthoringTopics;
 import limen.ui.authoring.StepFocus;
 import limen.ui.authoring.edit.BatteryDocument;
 import limen.ui.authoring.edit.Units;
-import limen.ui.authoring.internal.ChartCanvas;
 import limen.ui.authoring.internal.Charts;
+import limen.ui.charts.ChartCanvas;
 import limen.ui.authoring.preview.TrialPreview;
 
 /**

@@ -1,4 +1,4 @@
-package limen.ui.analysis.internal;
+package limen.ui.charts;
 
 import java.awt.image.BufferedImage;
 
@@ -13,13 +13,14 @@ import org.eclipse.swt.widgets.Composite;
 import org.jfree.chart.JFreeChart;
 
 /**
- * Shows a JFreeChart in SWT by drawing it with Java2D into an image of the canvas's size and copying the
- * pixels into an SWT image; AWT stays headless (no AWT window beside SWT's GTK). Redrawn on resize and when
- * the chart is replaced.
+ * Shows a JFreeChart in SWT: the chart is drawn by Java2D into a {@link BufferedImage} of the canvas's size
+ * and the pixels are copied into an SWT image (no AWT window is ever opened, so AWT runs headless beside
+ * SWT). Redrawn when the canvas is resized or the chart is replaced.
  */
 public final class ChartCanvas {
 
     static {
+        // Java2D draws into images only; never let it start an AWT toolkit next to SWT's GTK.
         if (System.getProperty("java.awt.headless") == null) {
             System.setProperty("java.awt.headless", "true");
         }
@@ -38,11 +39,12 @@ public final class ChartCanvas {
         canvas.addListener(SWT.Dispose, e -> disposeImage());
     }
 
+    /** @return the SWT control */
     public Canvas control() {
         return canvas;
     }
 
-    /** Shows a chart; null shows the placeholder text. */
+    /** Shows a chart (null shows the placeholder text). */
     public void setChart(JFreeChart newChart) {
         chart = newChart;
         disposeImage();
@@ -54,6 +56,7 @@ public final class ChartCanvas {
         return chart;
     }
 
+    /** Text shown when there is no chart. */
     public void setPlaceholder(String text) {
         placeholder = text == null ? "" : text;
         canvas.redraw();
@@ -80,8 +83,8 @@ public final class ChartCanvas {
         }
     }
 
-    /** @return the pixels of an AWT image as 24-bit SWT image data */
-    static ImageData toSwt(BufferedImage awt) {
+    /** @return the pixels of an AWT image as SWT image data (24-bit RGB) */
+    public static ImageData toSwt(BufferedImage awt) {
         int w = awt.getWidth();
         int h = awt.getHeight();
         ImageData data = new ImageData(w, h, 24, new PaletteData(0xFF0000, 0x00FF00, 0x0000FF));
