@@ -14,8 +14,9 @@ import limen.psychometric.Sigmoids;
 
 /**
  * The bootstrap's warm-started refit ({@link PsychometricFitter#refit}: Newton with scoring from the
- * generating estimate alone) against the full search ({@link PsychometricFitter#fit(BinomialData,
- * PsychometricFunction)}: grid, generating estimate and two climbs, BOBYQA where Newton fails), which is the
+ * generating estimate, checked by climbs from the best step and the best distinct grid point) against the
+ * full search ({@link PsychometricFitter#fit(BinomialData, PsychometricFunction)}: grid, generating estimate,
+ * best step and their climbs, BOBYQA where Newton fails), which is the
  * independent reference here: it is checked against R's {@code glm} and {@code optim} in
  * {@link GlmReferenceTest} and {@link OptimReferenceTest}. On every replicate the two must reach the same
  * optimum: the warm log-likelihood no lower than the full one beyond rounding, and the same threshold,
@@ -40,6 +41,12 @@ class BootstrapWarmStartTest {
                 FitOptions.of(Sigmoids.LOGISTIC).withFreeGuess(0.5).withLapseMax(0.06), ReferenceTables.dataset("raven_intensity"), 0.8));
         c.add(new Case("staircase-like 2AFC normal, 60 trials, lapse free",
                 FitOptions.of(Sigmoids.NORMAL).withGuess(0.5).withLapseMax(0.06), staircaseLike(), 0.5));
+        // an adaptive track with nearly coincident levels (invented): a likelihood with several modes, where
+        // the warm refit must also climb from the best step and the start grid
+        c.add(new Case("adaptive track, near-coincident levels, 2AFC logistic, lapse free",
+                FitOptions.of(Sigmoids.LOGISTIC).withGuess(0.5).withLapseMax(0.06),
+                new BinomialData(new double[] { 0.5003, 0.5949, 0.7071, 0.70735, 0.8409, 0.84104, 1.0, 1.4142, 2.0, 4.0, 8.0 },
+                        new int[] { 3, 7, 1, 14, 2, 14, 9, 2, 4, 2, 2 }, new int[] { 3, 6, 1, 5, 1, 13, 8, 2, 4, 2, 2 }), 0.5));
         c.add(new Case("staircase-like 3AFC Gumbel, 60 trials, lapse 0.02 fixed",
                 FitOptions.of(Sigmoids.GUMBEL).withGuess(1.0 / 3).withLapse(0.02), staircaseLike(), 0.5));
         return c;

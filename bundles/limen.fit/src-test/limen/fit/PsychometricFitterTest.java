@@ -37,8 +37,95 @@ class PsychometricFitterTest {
         BinomialData d = new BinomialData(new double[] { 1, 2, 3, 4 }, new int[] { 10, 10, 10, 10 }, new int[] { 0, 0, 10, 10 });
         FitResult r = new PsychometricFitter(FitOptions.of(Sigmoids.LOGISTIC).withLapseMax(0)).fit(d);
         assertTrue(r.warnings().stream().anyMatch(w -> w.contains("steep")), r + " " + r.warnings());
-        assertTrue(r.threshold() > 2 && r.threshold() < 3, "threshold " + r.threshold());
+        // every location between 2 and 3 fits as well: the normal form reports the midpoint
+        assertEquals(2.5, r.threshold(), 1e-12, "threshold");
         assertEquals(0.0, r.deviance(), 1e-6);
+    }
+
+    /**
+     * Along a flat ridge toward a step (19/19 beside 8/18, nothing else near) the climbs from different
+     * starts stop at different points of equal ln L; the normal form makes them one answer.
+     */
+    @Test
+    void flatRidgeGivesOneAnswerFromEveryStart() {
+        BinomialData d = new BinomialData(new double[] { 0.25, 0.3, 0.35, 0.4, 0.45, 0.5, 0.55, 0.6, 0.65, 0.7 },
+                new int[] { 1, 6, 18, 19, 6, 2, 2, 2, 2, 2 }, new int[] { 0, 5, 8, 19, 6, 2, 2, 2, 2, 2 });
+        PsychometricFitter fitter = new PsychometricFitter(FitOptions.of(Sigmoids.NORMAL).withGuess(0.5).withLapseMax(0.06));
+        FitResult plain = fitter.fit(d);
+        assertEquals(0.375, plain.threshold(), 1e-12, "midway between 0.35 and 0.4");
+        for (double mid : new double[] { 0.3, 0.36, 0.39, 0.5 }) {
+            for (double sd : new double[] { 0.005, 0.05 }) {
+                PsychometricFunction start = new PsychometricFunction(Sigmoids.NORMAL, mid, sd, 0.5, 0.01);
+                assertEquals(plain.function(), fitter.fit(d, start).function(), "from " + start);
+                assertEquals(plain.function(), fitter.refit(d, start).function(), "warm from " + start);
+            }
+        }
+    }
+
+    /**
+     * The maximum against an independent global search: Commons Math's BOBYQA (Powell 2009, Cambridge report
+     * DAMTP 2009/NA06) on ln L written here from {@link BinomialLikelihood}, in natural parameters (location,
+     * ln scale, lapse) inside the fitter's box, from 6 × 6 × 3 starts spread over it; the best of those
+     * 108 optima is a lower bound on the maximum, so the fit must be at least as high. The data are adaptive
+     * tracks (invented) whose likelihood has several modes (a steep function with a lapse, a shallower one
+     * without); on the second a climb from smooth starts alone stops on the lower mode, 0.49 below.
+     */
+    @Test
+    void fitIsAtLeastAsHighAsAGlobalMultiStartSearchOnMultimodalTracks() {
+        BinomialData[] tracks = {
+            new BinomialData(new double[] { 0.5, 0.5949, 0.7071, 0.70735, 0.8409, 0.84104, 1.0, 1.4142, 2.0, 4.0, 8.0 },
+                    new int[] { 1, 3, 3, 14, 3, 14, 12, 2, 4, 2, 2 }, new int[] { 1, 2, 1, 5, 3, 13, 12, 2, 4, 2, 2 }),
+            new BinomialData(new double[] { 0.5003, 0.5949, 0.7071, 0.70735, 0.8409, 0.84104, 1.0, 1.4142, 2.0, 4.0, 8.0 },
+                    new int[] { 3, 7, 1, 14, 2, 14, 9, 2, 4, 2, 2 }, new int[] { 3, 6, 1, 5, 1, 13, 8, 2, 4, 2, 2 }),
+            new BinomialData(new double[] { 0.25, 0.3536, 0.5, 0.7071, 0.70748, 0.8409, 0.84119, 1.0, 1.00017, 1.1892, 1.4142, 2.0, 4.0 },
+                    new int[] { 1, 3, 3, 4, 1, 3, 8, 6, 11, 8, 2, 4, 2 }, new int[] { 1, 1, 2, 2, 0, 2, 4, 6, 7, 8, 1, 4, 2 }),
+        };
+        double[] improvement = new double[tracks.length];
+        int t = 0;
+        FitOptions o = FitOptions.of(Sigmoids.LOGISTIC).withGuess(0.5).withLapseMax(0.06);
+        for (BinomialData d : tracks) {
+            FitResult fit = new PsychometricFitter(o).fit(d);
+            double lo = d.value(0);
+            double hi = d.value(d.size() - 1);
+            double range = hi - lo;
+            double[] lower = { lo - range, Math.log(range * 1e-3), 0 };
+            double[] upper = { hi + range, Math.log(range * 1e2), 0.06 };
+            // every point evaluated counts (BOBYQA can stop with "failed to reduce Q" near a degenerate optimum)
+            double[] best = { Double.NEGATIVE_INFINITY };
+            double[][] at = { null };
+            org.apache.commons.math3.analysis.MultivariateFunction minusLogL = p -> {
+                double ll = BinomialLikelihood.logLikelihood(d, new PsychometricFunction(Sigmoids.LOGISTIC, p[0], Math.exp(p[1]), 0.5, p[2]));
+                if (ll > best[0]) {
+                    best[0] = ll;
+                    at[0] = p.clone();
+                }
+                return -ll;
+            };
+            for (int i = 0; i < 6; i++) {
+                for (int j = 0; j < 6; j++) {
+                    for (int l = 0; l < 3; l++) {
+                        double[] start = { lo + range * (i + 0.5) / 6, lower[1] + (upper[1] - lower[1]) * (j + 0.5) / 6, 0.06 * (l + 0.5) / 3 };
+                        try {
+                            new org.apache.commons.math3.optim.nonlinear.scalar.noderiv.BOBYQAOptimizer(7, 0.1, 1e-10).optimize(
+                                    new org.apache.commons.math3.optim.MaxEval(20000),
+                                    new org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction(minusLogL),
+                                    org.apache.commons.math3.optim.nonlinear.scalar.GoalType.MINIMIZE,
+                                    new org.apache.commons.math3.optim.InitialGuess(start),
+                                    new org.apache.commons.math3.optim.SimpleBounds(lower, upper));
+                        } catch (org.apache.commons.math3.exception.MathIllegalStateException e) {
+                            // the best point it met is recorded
+                        }
+                    }
+                }
+            }
+            assertTrue(fit.logLikelihood() >= best[0] - 1e-6, d + ": fit " + fit.function() + " ln L " + fit.logLikelihood()
+                    + " below the multi-start search's " + best[0] + " at " + java.util.Arrays.toString(at[0]));
+            improvement[t++] = fit.logLikelihood() - best[0];
+        }
+        // the search is good enough to matter: it finds the fit's optimum, not something far below
+        for (double x : improvement) {
+            assertTrue(x < 1e-3, "multi-start search " + java.util.Arrays.toString(improvement) + " below the fits");
+        }
     }
 
     /** Threshold and slope from the definitions: ψ⁻¹ at the target and dψ/dx = (1 − γ − λ) F'(x). */

@@ -28,13 +28,15 @@ import limen.psychometric.PsychometricFunction;
  * Method: the parameters are mapped to dimensionless working coordinates (location in units of the data
  * range, log of the scale, γ/γmax, λ/λmax; the Weibull on ln x) inside the box location ∈ centre ± 3 ranges,
  * scale ∈ [range/1000, 100 range]. A grid of {@value #GRID_LOCATIONS} × {@value #GRID_SCALES} locations and
- * scales is evaluated; from the best grid point and from the best one at least {@value #DISTINCT_START}
- * working units away, box-constrained Newton-Raphson with Fisher scoring as safeguard (the fast path,
- * {@code NewtonScoring}) climbs to the maximum, and the better optimum wins; only where it fails from every
- * start (singular information, e.g. separated data) Powell's derivative-free bounded optimiser BOBYQA
- * (Commons Math {@link BOBYQAOptimizer}; Powell 2009, Cambridge report DAMTP 2009/NA06) runs from the same
- * starts and
- * takes over. The better optimum wins. Cells at 0% and 100% need no special handling (0 ln 0 = 0).
+ * scales is evaluated; from the best grid point, from the best one at least {@value #DISTINCT_START}
+ * working units away and from the best step ({@code Objective.stepStart}: near-step data can have a mode
+ * at the steep end that no smooth start leads to), box-constrained Newton-Raphson with Fisher scoring as
+ * safeguard (the fast path, {@code NewtonScoring}) climbs to the maximum, and the best optimum wins; only
+ * where it fails from every start Powell's derivative-free bounded optimiser BOBYQA (Commons Math
+ * {@link BOBYQAOptimizer}; Powell 2009, Cambridge report DAMTP 2009/NA06) runs from the same starts and
+ * takes over. On a flat ridge toward a step the result is put in a normal form ({@link #normalForm}), so
+ * that every path to it reports the same function. Cells at 0% and 100% need no special handling
+ * (0 ln 0 = 0).
  * <p>
  * Refuses, with {@link NotIdentifiableException}, data with fewer than 2 distinct values or with every
  * cell at the same proportion. Thread-safe: every fit uses its own optimiser.
@@ -50,6 +52,13 @@ public final class PsychometricFitter {
     private static final double BOUND_TOLERANCE = 1e-6;
     /** A log-likelihood difference too small to matter (far below the 0.5 of a 1-sd likelihood interval). */
     private static final double FLAT_LOG_LIKELIHOOD = 1e-6;
+    /** ln L change that {@link #normalForm} treats as none: rounding of a sum of a few hundred terms. */
+    private static final double NORMAL_FORM_FLAT = 1e-9;
+    /**
+     * Profile curvature of ln L in the log scale below which {@link #normalForm} tries the steep end (a scale
+     * the data identify has a curvature of order its information, 1 and more per unit for tens of trials).
+     */
+    private static final double FLAT_PROFILE_CURVATURE = 1e-4;
 
     private final FitOptions options;
 
@@ -81,17 +90,18 @@ public final class PsychometricFitter {
 
     /**
      * Refit of data close to those that gave {@code warm}: bootstrap replicates simulated from it, jackknife
-     * sets that leave one trial out. Newton with scoring climbs from {@code warm} alone
-     * ({@link NewtonScoring#converge}); such data have their optimum near it, so this converges in a few
-     * steps where the full search evaluates the grid and climbs from two starts. The warm result is kept
-     * only when it is a clean interior optimum: converged, finite, location and scale strictly inside their
-     * search box, the steepest allowed function not as good (the ridge toward a step, where the grid's
-     * starts can climb further), and no point of the start grid better (a sign of another, higher mode,
-     * e.g. with non-monotone cells; the grid costs {@value #GRID_LOCATIONS} × {@value #GRID_SCALES}
-     * likelihood evaluations, far less than the climbs). Otherwise the full search {@link #fit(BinomialData, PsychometricFunction)}
-     * with {@code warm} as its extra start decides, exactly as before. A free γ or λ may end on its bound
-     * (the projected method holds it there when the score presses outward). BootstrapWarmStartTest checks on
-     * many replicates that both paths reach the same optimum.
+     * sets that leave one trial out. Newton with scoring climbs from {@code warm} ({@link NewtonScoring#converge});
+     * such data have their optimum near it, so this converges in a few steps. The warm result is kept only
+     * when it is a clean interior optimum (converged, finite, location and scale strictly inside their search
+     * box, the steepest allowed function not as good) or the converged steep end of a ridge toward a step
+     * (scale on its lower bound, location inside), no point of the start grid is better, and the climbs from
+     * the full search's other starts (the best step, the best grid point at least {@value #DISTINCT_START}
+     * from it) do not end higher; those climbs stop as soon as they reach the warm optimum's basin. Otherwise
+     * the full search {@link #fit(BinomialData, PsychometricFunction)} with {@code warm} as its extra start
+     * decides. Adaptive tracks can have several modes (a steep function with a lapse beside a shallower one
+     * without), which is why the other starts are climbed too. A free γ or λ may end on its bound (the
+     * projected method holds it there when the score presses outward). BootstrapWarmStartTest checks on many
+     * replicates that both paths reach the same optimum.
      */
     FitResult refit(BinomialData data, PsychometricFunction warm) {
         return refit(data, warm, null);
@@ -106,7 +116,11 @@ public final class PsychometricFitter {
         double[] c = NewtonScoring.converge(objective, objective.coordinates(warm));
         if (c != null) {
             double v = objective.value(c);
-            if (cleanInteriorOptimum(objective, c, v) && !(min(gridValues(objective, data, grid)) < v)) {
+            boolean clean = cleanInteriorOptimum(objective, c, v);
+            // cheapest check first: the structure of c, the start grid, then the climbs from the other starts
+            if ((clean || steepEnd(objective, c, v)) && !(min(gridValues(objective, data, grid)) < v)
+                    && !betterFromStep(objective, c, v) && !betterFromGrid(objective, data, grid, c, v)) {
+                c = normalForm(objective, c);
                 PsychometricFunction f = objective.function(c);
                 return new FitResult(data, options, f, warnings(objective, c, f, data), objective.evaluations(), false, true);
             }
@@ -168,6 +182,95 @@ public final class PsychometricFitter {
         return m;
     }
 
+    /**
+     * One representative of an optimum on a flat ridge toward a step, so that every path to it (the warm
+     * refit, the full search from any start) reports the same function: where the steepest allowed function at
+     * c's location fits as well as c to {@value #NORMAL_FORM_FLAT} in ln L, the scale moves to its lower bound;
+     * there, where moving the location to the midpoint between the stimulus values on either side of it
+     * changes ln L by no more than that either (no cell within the step's rise), the location moves there.
+     * Along such a ridge the data cannot tell these functions apart, and the climbs otherwise stop wherever
+     * ln L stops improving.
+     *
+     * @return c, or its normal form
+     */
+    private static double[] normalForm(Objective objective, double[] c) {
+        if (c == null) {
+            return null;
+        }
+        double v = objective.value(c);
+        double[] lo = objective.lowerBounds();
+        double[] steep = c.clone();
+        steep[1] = lo[1];
+        if (c[1] > lo[1] && !(objective.value(steep) <= v + NORMAL_FORM_FLAT)) {
+            // a curved ridge: the location follows the scale; only where the profile is flat in the scale
+            if (!(Math.abs(NewtonScoring.scaleProfileCurvature(objective, c)) < FLAT_PROFILE_CURVATURE)) {
+                return c;
+            }
+            steep = NewtonScoring.atSteepEnd(objective, c);
+            if (steep == null || !(objective.value(steep) <= v + NORMAL_FORM_FLAT)) {
+                return c;
+            }
+        }
+        double[] mid = steep.clone();
+        mid[0] = objective.gapMidpoint(steep[0]);
+        return objective.value(mid) <= v + NORMAL_FORM_FLAT ? mid : steep;
+    }
+
+    /**
+     * @return whether c, a converged climb's end, is the steep end of a ridge toward a step: finite, the
+     *         location inside its box, the scale at its lower bound
+     */
+    private static boolean steepEnd(Objective objective, double[] c, double v) {
+        if (!Double.isFinite(v)) {
+            return false;
+        }
+        for (double ci : c) {
+            if (!Double.isFinite(ci)) {
+                return false;
+            }
+        }
+        double[] lo = objective.lowerBounds();
+        double[] hi = objective.upperBounds();
+        return c[0] > lo[0] + BOUND_TOLERANCE && c[0] < hi[0] - BOUND_TOLERANCE && c[1] <= lo[1] + BOUND_TOLERANCE;
+    }
+
+    /**
+     * The full search's second start, for a warm refit: from the best start-grid point at least
+     * {@value #DISTINCT_START} working units from c, climbs (stopping early in c's basin).
+     *
+     * @return whether that climb ends higher than c by more than {@value #FLAT_LOG_LIKELIHOOD} in ln L (a
+     *         better, smoother optimum elsewhere: the full search decides)
+     */
+    private boolean betterFromGrid(Objective objective, BinomialData data, GridCache cache, double[] c, double v) {
+        double[][] points = grid(objective, data);
+        double[] values = gridValues(objective, data, cache);
+        int other = -1;
+        for (int i = 0; i < points.length; i++) {
+            if (distance(points[i], c) >= DISTINCT_START && (other < 0 || values[i] < values[other])) {
+                other = i;
+            }
+        }
+        if (other < 0) {
+            return false;
+        }
+        double[] p = NewtonScoring.maximise(objective, points[other], c);
+        return p != null && objective.value(p) < v - FLAT_LOG_LIKELIHOOD;
+    }
+
+    /**
+     * @return whether the climb from {@link Objective#stepStart} (stopping early in c's basin) ends higher
+     *         than c by more than {@value #FLAT_LOG_LIKELIHOOD} in ln L: a mode at the steep end, e.g. a steep
+     *         function with a lapse where c is a shallow one without
+     */
+    private static boolean betterFromStep(Objective objective, double[] c, double v) {
+        double[] start = objective.stepStart();
+        if (start == null) {
+            return false;
+        }
+        double[] p = NewtonScoring.maximise(objective, start, c);
+        return p != null && objective.value(p) < v - FLAT_LOG_LIKELIHOOD;
+    }
+
     private static boolean cleanInteriorOptimum(Objective objective, double[] c, double v) {
         if (!Double.isFinite(v)) {
             return false;
@@ -196,7 +299,7 @@ public final class PsychometricFitter {
 
     private FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly, GridCache grid) {
         Objective objective = new Objective(data, options);
-        double[][] starts = starts(objective, data, extraStart, grid);
+        double[][] starts = allStarts(objective, data, extraStart, grid);
         double[] best = null;
         double bestValue = Double.POSITIVE_INFINITY;
         boolean bestDerivativeFree = false;
@@ -222,8 +325,21 @@ public final class PsychometricFitter {
                 }
             }
         }
+        best = normalForm(objective, best);
         PsychometricFunction f = objective.function(best);
         return new FitResult(data, options, f, warnings(objective, best, f, data), objective.evaluations(), bestDerivativeFree);
+    }
+
+    /** @return {@link #starts} and {@link Objective#stepStart} where there is one */
+    private double[][] allStarts(Objective objective, BinomialData data, PsychometricFunction extraStart, GridCache cache) {
+        double[][] starts = starts(objective, data, extraStart, cache);
+        double[] step = objective.stepStart();
+        if (step == null) {
+            return starts;
+        }
+        starts = Arrays.copyOf(starts, starts.length + 1);
+        starts[starts.length - 1] = step;
+        return starts;
     }
 
     /**

@@ -1,12 +1,5 @@
 package limen.fit.internal;
 
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.CholeskyDecomposition;
-import org.apache.commons.math3.linear.NonPositiveDefiniteMatrixException;
-import org.apache.commons.math3.linear.NonSymmetricMatrixException;
-import org.apache.commons.math3.linear.RealVector;
-
 /**
  * Box-constrained Newton-Raphson on ln L with Fisher scoring as its safeguard. Each iteration solves
  * J δ = g with the observed information J (minus the Hessian) where J is positive definite, else I δ = g
@@ -16,8 +9,8 @@ import org.apache.commons.math3.linear.RealVector;
  * active-set rule of projected Newton methods, Bertsekas 1982, SIAM J. Control Optim. 20(2), 221-246). The
  * step is shortened to at most {@value #MAX_STEP} working units, projected onto the box and halved until −ln L decreases (a scoring step that succeeds at once is
  * doubled while −ln L keeps decreasing). Newton converges quadratically near the
- * optimum, where scoring alone can crawl when the data fit poorly. Linear solves use Commons Math's
- * {@link CholeskyDecomposition}.
+ * optimum, where scoring alone can crawl when the data fit poorly. Linear solves use {@link SmallCholesky}
+ * (checked against Commons Math's {@code CholeskyDecomposition}).
  * <p>
  * Where both matrices are singular (the function has become a step, or has left the data) it climbs along the
  * score instead, with the same line search, until a bound holds the degenerate coordinate; and it stops where
@@ -45,6 +38,16 @@ public final class NewtonScoring {
     private static final double STALL_GAIN = 1e-10;
     /** Largest move (working units) over {@value #STALL_WINDOW} stalled iterations that still counts as converged. */
     private static final double STALLED_MOVE = 1e-6;
+    /**
+     * Gain of ln L over {@value #STALL_WINDOW} iterations below which a climb that cannot take Newton steps and
+     * presses toward steeper functions tries the steep end of the ridge ({@link #steepEnd}).
+     */
+    private static final double RIDGE_GAIN = 1e-4;
+    /** Smallest multiple of the expected information's diagonal added to J in {@link #modifiedNewton}. */
+    private static final double MODIFIED_TAU_MIN = 1e-3;
+    private static final int MODIFIED_TRIES = 4;
+    /** Attempts at the steep end per climb. */
+    private static final int MAX_JUMPS = 2;
 
     private NewtonScoring() {
     }
@@ -74,6 +77,15 @@ public final class NewtonScoring {
     }
 
     private static double[] climb(Objective objective, double[] start, double[] known, boolean convergedOnly) {
+        return climb(objective, start, known, convergedOnly, MAX_JUMPS, false);
+    }
+
+    /**
+     * @param jumps     attempts left at {@link #steepEnd} (a climb started there makes none)
+     * @param holdScale keep the scale coordinate where it starts (the steep end's first climb)
+     */
+    private static double[] climb(Objective objective, double[] start, double[] known, boolean convergedOnly, int jumps,
+            boolean holdScale) {
         int dim = objective.dimension();
         double[] lo = objective.lowerBounds();
         double[] hi = objective.upperBounds();
@@ -87,6 +99,8 @@ public final class NewtonScoring {
         double[][] observed = new double[dim][dim];
         double[] trial = new double[dim];
         double[] history = new double[MAX_ITERATIONS + 1];
+        Workspace ws = new Workspace(dim);
+        boolean[] held = new boolean[dim];
         history[0] = value;
         // iterates of the last STALL_WINDOW + 1 iterations (ring), to tell a converged stall from a creep
         double[][] recent = convergedOnly ? new double[STALL_WINDOW + 1][] : null;
@@ -105,19 +119,35 @@ public final class NewtonScoring {
                 return distance(c, before) < STALLED_MOVE ? c : null;
             }
             objective.scoreAndInformation(c, score, expected, observed);
-            boolean[] held = new boolean[dim];
+            if (!finite(score)) {
+                return null; // ψ has saturated at 0 or 1 where the cell has the other outcome: no usable direction
+            }
             int free = 0;
             for (int j = 0; j < dim; j++) {
-                held[j] = (c[j] <= lo[j] && score[j] < 0) || (c[j] >= hi[j] && score[j] > 0);
+                held[j] = (c[j] <= lo[j] && score[j] < 0) || (c[j] >= hi[j] && score[j] > 0) || (holdScale && j == 1);
                 free += held[j] ? 0 : 1;
             }
             if (free == 0 || freeScore(score, held) < SCORE_TOLERANCE) {
                 return c; // every coordinate at a bound it presses against, or a stationary point
             }
-            double[] step = solve(observed, score, held, free);
+            double[] step = solve(observed, score, held, free, ws);
+            if (step == null) {
+                step = modifiedNewton(observed, expected, score, held, free, ws);
+            }
             boolean scoring = step == null;
             if (scoring) {
-                step = solve(expected, score, held, free);
+                step = solve(expected, score, held, free, ws);
+            }
+            boolean singular = step == null;
+            if (jumps > 0 && score[1] < 0 && c[1] > lo[1] && (singular || (step[1] < 0 && iteration >= STALL_WINDOW
+                    && history[iteration - STALL_WINDOW] - value < RIDGE_GAIN))) {
+                // on a ridge toward a step, where the information is singular (one cell holds the function) or
+                // the climb creeps: try the ridge's end, at the steepest allowed function
+                jumps--;
+                double[] end = steepEnd(objective, c, value, convergedOnly);
+                if (end != null && objective.value(end) <= value) {
+                    return end;
+                }
             }
             if (step == null && convergedOnly) {
                 return null; // a degenerate function (a step, or one that has left the data): the full search decides
@@ -174,6 +204,74 @@ public final class NewtonScoring {
     }
 
     /**
+     * @return c moved to the steep end (scale at its lower bound) and climbed there with the scale held
+     *         (location and free rates re-optimised), or null when that climb fails
+     */
+    public static double[] atSteepEnd(Objective objective, double[] c) {
+        return climb(objective, objective.steepEndOfRidge(c), null, false, 0, true);
+    }
+
+    /**
+     * The curvature of the profile log-likelihood in the scale coordinate at c, the other free coordinates
+     * re-optimised: the Schur complement J_ss − J_s,r J_r,r⁻¹ J_r,s of the observed information J (free
+     * coordinates r: not the scale, not on a bound). Near 0 on a ridge along which the function can steepen
+     * without changing ln L.
+     *
+     * @return the curvature, or NaN where J_r,r is not positive definite
+     */
+    public static double scaleProfileCurvature(Objective objective, double[] c) {
+        int dim = objective.dimension();
+        double[] score = new double[dim];
+        double[][] expected = new double[dim][dim];
+        double[][] observed = new double[dim][dim];
+        objective.scoreAndInformation(c, score, expected, observed);
+        double[] lo = objective.lowerBounds();
+        double[] hi = objective.upperBounds();
+        int[] rest = new int[dim];
+        int m = 0;
+        for (int j = 0; j < dim; j++) {
+            if (j != 1 && c[j] > lo[j] && c[j] < hi[j]) {
+                rest[m++] = j;
+            }
+        }
+        double[][] a = new double[m][m];
+        double[] x = new double[m];
+        for (int p = 0; p < m; p++) {
+            x[p] = observed[rest[p]][1];
+            for (int q = 0; q < m; q++) {
+                a[p][q] = observed[rest[p]][rest[q]];
+            }
+        }
+        if (m > 0 && !SmallCholesky.solveInPlace(a, x, m)) {
+            return Double.NaN;
+        }
+        double schur = observed[1][1];
+        for (int p = 0; p < m; p++) {
+            schur -= observed[1][rest[p]] * x[p];
+        }
+        return schur;
+    }
+
+    /**
+     * The end of a ridge toward a step: {@link Objective#steepEndOfRidge} (the scale at its lower bound, the
+     * location moved along the ridge), the climb over the other coordinates with the scale held there, then
+     * the free climb (without further jumps), which keeps the scale there while the score presses toward
+     * steeper functions.
+     *
+     * @return the optimum reached from there, or null when that climb failed
+     */
+    private static double[] steepEnd(Objective objective, double[] c, double value, boolean convergedOnly) {
+        // along the ridge the location follows the scale: start where the cell that holds the function keeps
+        // its place on it, then the other coordinates with the scale held
+        double[] end = climb(objective, objective.steepEndOfRidge(c), null, false, 0, true);
+        if (end == null || !(objective.value(end) <= value)) {
+            return null;
+        }
+        double[] free = climb(objective, end, null, convergedOnly, 0, false);
+        return free != null || convergedOnly ? free : end;
+    }
+
+    /**
      * Tries c + 2t·step, 4t·step, ... (projected) while each lowers the objective; leaves the best in trial.
      *
      * @return the objective at trial
@@ -217,6 +315,15 @@ public final class NewtonScoring {
         return m;
     }
 
+    private static boolean finite(double[] v) {
+        for (double x : v) {
+            if (!Double.isFinite(x)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private static double maxAbs(double[] v) {
         double m = 0;
         for (double x : v) {
@@ -233,11 +340,58 @@ public final class NewtonScoring {
         return s;
     }
 
-    /** @return the solution of the reduced system (held coordinates fixed), or null if not positive definite */
-    private static double[] solve(double[][] matrix, double[] score, boolean[] held, int free) {
-        double[][] a = new double[free][free];
-        double[] b = new double[free];
-        int[] index = new int[free];
+    /**
+     * Newton with a modified Hessian where J is not positive definite (off the crest of a curved ridge, where
+     * ln L is not concave): J + τ D with D the diagonal of I and the smallest τ in {@value #MODIFIED_TAU_MIN}
+     * × 10^m, m = 0 … {@value #MODIFIED_TRIES} − 1, that is positive definite (Nocedal &amp; Wright 2006,
+     * Numerical Optimization, 2nd ed., §3.4). It keeps the curvature along the crest, which scoring loses,
+     * so the climb follows the ridge instead of zigzagging across it.
+     *
+     * @return the step, or null when no τ tried gives a positive definite matrix
+     */
+    private static double[] modifiedNewton(double[][] observed, double[][] expected, double[] score, boolean[] held, int free,
+            Workspace ws) {
+        int dim = score.length;
+        double[][] m = ws.modified;
+        double tau = MODIFIED_TAU_MIN;
+        for (int t = 0; t < MODIFIED_TRIES; t++, tau *= 10) {
+            for (int a = 0; a < dim; a++) {
+                System.arraycopy(observed[a], 0, m[a], 0, dim);
+                m[a][a] += tau * Math.max(expected[a][a], Double.MIN_NORMAL);
+            }
+            double[] step = solve(m, score, held, free, ws);
+            if (step != null) {
+                return step;
+            }
+        }
+        return null;
+    }
+
+    /** Scratch arrays of one climb (the solves run several times per iteration). */
+    private static final class Workspace {
+        final double[][] reduced;
+        final double[] rhs;
+        final int[] index;
+        final double[] step;
+        final double[][] modified;
+
+        Workspace(int dim) {
+            reduced = new double[dim][dim];
+            rhs = new double[dim];
+            index = new int[dim];
+            step = new double[dim];
+            modified = new double[dim][dim];
+        }
+    }
+
+    /**
+     * @return the solution of the reduced system (held coordinates fixed) in {@code ws.step}, or null if not
+     *         positive definite
+     */
+    private static double[] solve(double[][] matrix, double[] score, boolean[] held, int free, Workspace ws) {
+        double[][] a = ws.reduced;
+        double[] b = ws.rhs;
+        int[] index = ws.index;
         for (int j = 0, p = 0; j < held.length; j++) {
             if (!held[j]) {
                 index[p++] = j;
@@ -252,20 +406,13 @@ public final class NewtonScoring {
                 }
             }
         }
-        RealVector x;
-        try {
-            x = new CholeskyDecomposition(new Array2DRowRealMatrix(a, false), 1e-12, 1e-14).getSolver()
-                    .solve(new ArrayRealVector(b, false));
-        } catch (NonPositiveDefiniteMatrixException | NonSymmetricMatrixException e) {
+        if (!SmallCholesky.solveInPlace(a, b, free)) {
             return null;
         }
-        double[] step = new double[held.length];
+        double[] step = ws.step;
+        java.util.Arrays.fill(step, 0);
         for (int p = 0; p < free; p++) {
-            double v = x.getEntry(p);
-            if (!Double.isFinite(v)) {
-                return null;
-            }
-            step[index[p]] = v;
+            step[index[p]] = b[p];
         }
         return step;
     }

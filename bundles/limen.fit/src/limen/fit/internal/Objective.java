@@ -174,6 +174,122 @@ public final class Objective implements MultivariateFunction {
         return -sum;
     }
 
+    /**
+     * The best step, as a start at the steep end of the box. A step at u* (F = 0 below, 1 above) has
+     * ψ = γ below and 1 − λ above, so its log-likelihood is K_b ln γ + (N_b − K_b) ln(1 − γ) + K_a ln(1 − λ)
+     * + (N_a − K_a) ln λ with the counts K, N below (b) and above (a) u*; a free γ or λ takes its closed-form
+     * maximum K_b / N_b or (N_a − K_a) / N_a, clamped into its bounds. Every split between neighbouring
+     * distinct values is tried, with prefix sums over the sorted cells. Multi-start searches need it because
+     * near-step data (a steep function with a lapse, an adaptive track's narrow range of levels) can have a
+     * mode at the steep end that neither a smooth start nor the start grid leads to.
+     *
+     * @return working coordinates: location at the best split's midpoint, the scale at its lower bound, γ and
+     *         λ as above; null when no step has a finite likelihood (e.g. γ = λ = 0 fixed and data that
+     *         are not separated)
+     */
+    public double[] stepStart() {
+        int size = u.length;
+        int[] order = new int[size];
+        for (int i = 0; i < size; i++) {
+            int j = i;
+            while (j > 0 && u[order[j - 1]] > u[i]) { // insertion sort: cells arrive sorted or nearly so
+                order[j] = order[j - 1];
+                j--;
+            }
+            order[j] = i;
+        }
+        long totalK = 0;
+        long totalN = 0;
+        for (int i = 0; i < size; i++) {
+            totalK += k[i];
+            totalN += n[i];
+        }
+        long kb = 0;
+        long nb = 0;
+        double best = Double.NEGATIVE_INFINITY;
+        double[] start = null;
+        for (int p = 0; p < size - 1; p++) {
+            kb += k[order[p]];
+            nb += n[order[p]];
+            double below = u[order[p]];
+            double above = u[order[p + 1]];
+            if (!(above > below)) {
+                continue;
+            }
+            long ka = totalK - kb;
+            long na = totalN - nb;
+            double g = options.guessFree() ? Math.min(options.guessMax(), (double) kb / nb) : options.guess();
+            double l = options.lapseFree() ? Math.min(options.lapseMax(), (double) (na - ka) / na) : options.lapse();
+            double ll = xlogy(kb, g) + xlogy(nb - kb, 1 - g) + xlogy(ka, 1 - l) + xlogy(na - ka, l);
+            if (ll > best) {
+                best = ll;
+                start = coordinates((0.5 * (below + above) - centre) / range, LOG_SCALE_MIN, g, l);
+            }
+        }
+        return start;
+    }
+
+    /**
+     * The point at the steep end of the ridge through c along which one cell holds the function: the scale at
+     * its lower bound and the location moved so that the cell where F changes most (largest n_i dF/dz at c)
+     * keeps its z = (u_i − m)/s, hence its F; cells far in the tails stay there. Where no other cell is
+     * within the rise, ln L is the same as at c.
+     *
+     * @return working coordinates (guess and lapse as in c)
+     */
+    public double[] steepEndOfRidge(double[] c) {
+        double m = workingLocation(c);
+        double s = workingScale(c);
+        double steepest = range * Math.exp(LOG_SCALE_MIN);
+        double[] e = new double[4];
+        int pivot = -1;
+        double most = 0;
+        for (int i = 0; i < u.length; i++) {
+            working.evaluate(u[i], m, s, e);
+            double w = n[i] * e[2] * s;
+            if (w > most) {
+                most = w;
+                pivot = i;
+            }
+        }
+        double[] end = c.clone();
+        end[1] = LOG_SCALE_MIN;
+        if (pivot >= 0) {
+            double z = (u[pivot] - m) / s;
+            end[0] = clamp((u[pivot] - z * steepest - centre) / range, -LOCATION_BOUND, LOCATION_BOUND);
+        }
+        return end;
+    }
+
+    /**
+     * @param c0 a location in working coordinates
+     * @return the working location midway between the nearest distinct stimulus values below and above c0
+     *         (in the working domain: ln x for the Weibull), or c0 itself outside the data or on a value
+     */
+    public double gapMidpoint(double c0) {
+        double m = centre + c0 * range;
+        double below = Double.NEGATIVE_INFINITY;
+        double above = Double.POSITIVE_INFINITY;
+        for (double ui : u) {
+            if (ui < m) {
+                below = Math.max(below, ui);
+            } else if (ui > m) {
+                above = Math.min(above, ui);
+            } else {
+                return c0;
+            }
+        }
+        if (below == Double.NEGATIVE_INFINITY || above == Double.POSITIVE_INFINITY) {
+            return c0;
+        }
+        return (0.5 * (below + above) - centre) / range;
+    }
+
+    /** @return count · ln p, 0 for a zero count */
+    private static double xlogy(long count, double p) {
+        return count == 0 ? 0 : count * Math.log(p);
+    }
+
     /** @return whether these are the stimulus values and trial counts of this objective's data */
     public boolean sameDesign(double[] values, int[] trials) {
         return java.util.Arrays.equals(x, values) && java.util.Arrays.equals(n, trials);
@@ -203,17 +319,16 @@ public final class Objective implements MultivariateFunction {
         double g = guess(c);
         double l = lapse(c);
         double r = 1 - g - l;
-        int gi = options.guessFree() ? 2 : -1;
-        int li = options.lapseFree() ? (gi < 0 ? 2 : 3) : -1;
-        java.util.Arrays.fill(score, 0);
-        for (int a = 0; a < dimension; a++) {
-            java.util.Arrays.fill(expected[a], 0);
-            if (observed != null) {
-                java.util.Arrays.fill(observed[a], 0);
-            }
-        }
-        double[] d = new double[dimension];
-        double[][] dd = new double[dimension][dimension];
+        boolean guessFree = options.guessFree();
+        boolean lapseFree = options.lapseFree();
+        double gMax = guessFree ? options.guessMax() : 0;
+        double lMax = lapseFree ? options.lapseMax() : 0;
+        boolean wantObserved = observed != null;
+        // Coordinates 0 (location), 1 (scale), G (guess) and L (lapse) in local sums, a fixed rate's derivative
+        // 0: the sums stay in registers, where array elements would be stored and reloaded for every cell.
+        double s0 = 0, s1 = 0, sG = 0, sL = 0;
+        double e00 = 0, e10 = 0, e11 = 0, eG0 = 0, eG1 = 0, eGG = 0, eL0 = 0, eL1 = 0, eLG = 0, eLL = 0;
+        double o00 = 0, o10 = 0, o11 = 0, oG0 = 0, oG1 = 0, oGG = 0, oL0 = 0, oL1 = 0, oLG = 0, oLL = 0;
         double[] e = new double[4];
         for (int i = 0; i < u.length; i++) {
             working.evaluate(u[i], mU, s, e);
@@ -225,52 +340,103 @@ public final class Objective implements MultivariateFunction {
             double du = u[i] - mU;
             double f0 = -range * fu;
             double f1 = -du * fu;
-            d[0] = r * f0;
-            d[1] = r * f1;
-            if (gi > 0) {
-                d[gi] = options.guessMax() * fc;
-            }
-            if (li > 0) {
-                d[li] = -options.lapseMax() * f;
-            }
+            double d0 = r * f0;
+            double d1 = r * f1;
+            double dG = gMax * fc;
+            double dL = -lMax * f;
+            int ki = k[i];
+            int ni = n[i];
             double pq = Math.max(psi * q, Double.MIN_NORMAL);
-            double rho = (k[i] - n[i] * psi) / pq;
-            double w = n[i] / pq;
-            for (int a = 0; a < dimension; a++) {
-                score[a] += rho * d[a];
-                for (int b = 0; b <= a; b++) {
-                    expected[a][b] += w * d[a] * d[b];
-                }
-            }
-            if (observed != null) {
+            // one division: 1/ψ = (1 − ψ)/(ψ(1 − ψ)) and 1/(1 − ψ) = ψ/(ψ(1 − ψ)) where the product is normal
+            double inv = 1 / pq;
+            double rho = (ki - ni * psi) * inv;
+            double w = ni * inv;
+            s0 += rho * d0;
+            s1 += rho * d1;
+            sG += rho * dG;
+            sL += rho * dL;
+            double w0 = w * d0;
+            double w1 = w * d1;
+            double wG = w * dG;
+            e00 += w0 * d0;
+            e10 += w1 * d0;
+            e11 += w1 * d1;
+            eG0 += wG * d0;
+            eG1 += wG * d1;
+            eGG += wG * dG;
+            eL0 += w0 * dL;
+            eL1 += w1 * dL;
+            eLG += wG * dL;
+            eLL += w * dL * dL;
+            if (wantObserved) {
                 double fuu = e[3];
-                dd[0][0] = r * range * range * fuu;
-                dd[1][0] = r * range * (fu + du * fuu);
-                dd[1][1] = r * du * (fu + du * fuu);
-                if (gi > 0) {
-                    dd[gi][0] = -options.guessMax() * f0;
-                    dd[gi][1] = -options.guessMax() * f1;
+                double curvature;
+                if (psi * q >= Double.MIN_NORMAL) {
+                    double invPsi = q * inv;
+                    double invQ = psi * inv;
+                    curvature = ki * invPsi * invPsi + (ni - ki) * invQ * invQ;
+                } else {
+                    double psiSafe = Math.max(psi, Double.MIN_NORMAL);
+                    double qSafe = Math.max(q, Double.MIN_NORMAL);
+                    // a term without trials of its outcome is 0, also where ψ or 1 − ψ has underflowed (a cell far
+                    // above a function without lapses): 0 / MIN_NORMAL² would be 0 / 0 and make J NaN
+                    curvature = (ki > 0 ? ki / psiSafe / psiSafe : 0) + (ni > ki ? (ni - ki) / qSafe / qSafe : 0);
                 }
-                if (li > 0) {
-                    dd[li][0] = -options.lapseMax() * f0;
-                    dd[li][1] = -options.lapseMax() * f1;
-                }
-                double psiSafe = Math.max(psi, Double.MIN_NORMAL);
-                double qSafe = Math.max(q, Double.MIN_NORMAL);
-                double curvature = k[i] / (psiSafe * psiSafe) + (n[i] - k[i]) / (qSafe * qSafe);
-                for (int a = 0; a < dimension; a++) {
-                    for (int b = 0; b <= a; b++) {
-                        observed[a][b] += curvature * d[a] * d[b] - rho * dd[a][b];
-                    }
-                }
+                double c0 = curvature * d0;
+                double c1 = curvature * d1;
+                double cG = curvature * dG;
+                double cross = fu + du * fuu;
+                o00 += c0 * d0 - rho * r * range * range * fuu;
+                o10 += c1 * d0 - rho * r * range * cross;
+                o11 += c1 * d1 - rho * r * du * cross;
+                oG0 += cG * d0 + rho * gMax * f0;
+                oG1 += cG * d1 + rho * gMax * f1;
+                oGG += cG * dG;
+                oL0 += c0 * dL + rho * lMax * f0;
+                oL1 += c1 * dL + rho * lMax * f1;
+                oLG += cG * dL;
+                oLL += curvature * dL * dL;
             }
         }
-        for (int a = 0; a < dimension; a++) {
-            for (int b = 0; b < a; b++) {
-                expected[b][a] = expected[a][b];
-                if (observed != null) {
-                    observed[b][a] = observed[a][b];
-                }
+        int gi = guessFree ? 2 : -1;
+        int li = lapseFree ? (guessFree ? 3 : 2) : -1;
+        score[0] = s0;
+        score[1] = s1;
+        fill(expected, e00, e10, e11, gi, eG0, eG1, eGG, li, eL0, eL1, eLG, eLL);
+        if (gi > 0) {
+            score[gi] = sG;
+        }
+        if (li > 0) {
+            score[li] = sL;
+        }
+        if (wantObserved) {
+            fill(observed, o00, o10, o11, gi, oG0, oG1, oGG, li, oL0, oL1, oLG, oLL);
+        }
+    }
+
+    /** Writes the symmetric matrix of the sums into m (rows and columns gi, li only where those are free). */
+    private static void fill(double[][] m, double m00, double m10, double m11, int gi, double mG0, double mG1, double mGG,
+            int li, double mL0, double mL1, double mLG, double mLL) {
+        m[0][0] = m00;
+        m[1][0] = m10;
+        m[0][1] = m10;
+        m[1][1] = m11;
+        if (gi > 0) {
+            m[gi][0] = mG0;
+            m[0][gi] = mG0;
+            m[gi][1] = mG1;
+            m[1][gi] = mG1;
+            m[gi][gi] = mGG;
+        }
+        if (li > 0) {
+            m[li][0] = mL0;
+            m[0][li] = mL0;
+            m[li][1] = mL1;
+            m[1][li] = mL1;
+            m[li][li] = mLL;
+            if (gi > 0) {
+                m[li][gi] = mLG;
+                m[gi][li] = mLG;
             }
         }
     }
