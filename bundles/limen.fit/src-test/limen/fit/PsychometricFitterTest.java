@@ -40,6 +40,15 @@ class PsychometricFitterTest {
         // every location between 2 and 3 fits as well: the normal form reports the midpoint
         assertEquals(2.5, r.threshold(), 1e-12, "threshold");
         assertEquals(0.0, r.deviance(), 1e-6);
+        // a refit from the estimate keeps it (the steep end of the ridge) and works out the same warnings when
+        // asked, and the same ln L and deviance
+        PsychometricFitter fitter = new PsychometricFitter(FitOptions.of(Sigmoids.LOGISTIC).withLapseMax(0));
+        FitResult again = fitter.refit(d, r.function());
+        assertTrue(again.warmStarted(), "warm start kept");
+        assertEquals(r.function(), again.function());
+        assertEquals(r.warnings(), again.warnings());
+        assertEquals(r.logLikelihood(), again.logLikelihood(), 0.0);
+        assertEquals(r.deviance(), again.deviance(), 0.0);
     }
 
     /**

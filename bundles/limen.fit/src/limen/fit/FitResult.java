@@ -1,13 +1,16 @@
 package limen.fit;
 
 import java.util.List;
+import java.util.function.Supplier;
 
 import limen.psychometric.PsychometricFunction;
 
 /**
  * The outcome of one maximum-likelihood fit ({@link PsychometricFitter#fit}): the fitted function, its
  * threshold and slope, log-likelihood and deviance, and warnings about parameters that ended on a bound
- * of the search box (which means the data constrain them poorly). Immutable.
+ * of the search box (which means the data constrain them poorly). Immutable; the log-likelihood, the deviance
+ * and the warnings are worked out when first asked for (a bootstrap refit is asked only for its threshold,
+ * slope and deviance).
  */
 public final class FitResult {
 
@@ -18,9 +21,12 @@ public final class FitResult {
     private final double threshold;
     private final double thresholdAtF;
     private final double slope;
-    private final double logLikelihood;
-    private final double deviance;
-    private final List<String> warnings;
+    private double logLikelihood;
+    private boolean logLikelihoodKnown;
+    private double deviance;
+    private boolean devianceKnown;
+    private Supplier<List<String>> warningSource;
+    private List<String> warnings;
     private final long evaluations;
     private final boolean derivativeFree;
     private final boolean warmStarted;
@@ -32,6 +38,12 @@ public final class FitResult {
 
     FitResult(BinomialData data, FitOptions options, PsychometricFunction function, List<String> warnings, long evaluations,
             boolean derivativeFree, boolean warmStarted) {
+        this(data, options, function, () -> warnings, evaluations, derivativeFree, warmStarted);
+    }
+
+    /** @param warnings worked out on the first call of {@link #warnings()}, at most once */
+    FitResult(BinomialData data, FitOptions options, PsychometricFunction function, Supplier<List<String>> warnings,
+            long evaluations, boolean derivativeFree, boolean warmStarted) {
         this.data = data;
         this.options = options;
         this.function = function;
@@ -39,9 +51,7 @@ public final class FitResult {
         this.threshold = thresholdOf(function, options);
         this.thresholdAtF = Double.isNaN(options.targetF()) ? Double.NaN : function.inverseF(options.targetF());
         this.slope = Double.isNaN(threshold) ? Double.NaN : function.psiDerivative(threshold);
-        this.logLikelihood = BinomialLikelihood.logLikelihood(data, function);
-        this.deviance = BinomialLikelihood.deviance(data, function);
-        this.warnings = List.copyOf(warnings);
+        this.warningSource = warnings;
         this.evaluations = evaluations;
         this.derivativeFree = derivativeFree;
         this.warmStarted = warmStarted;
@@ -103,12 +113,20 @@ public final class FitResult {
     }
 
     /** @return ln L including the binomial coefficients ({@link BinomialLikelihood#logLikelihood}) */
-    public double logLikelihood() {
+    public synchronized double logLikelihood() {
+        if (!logLikelihoodKnown) {
+            logLikelihood = BinomialLikelihood.logLikelihood(data, function);
+            logLikelihoodKnown = true;
+        }
         return logLikelihood;
     }
 
     /** @return the deviance D ({@link BinomialLikelihood#deviance}) */
-    public double deviance() {
+    public synchronized double deviance() {
+        if (!devianceKnown) {
+            deviance = BinomialLikelihood.deviance(data, function);
+            devianceKnown = true;
+        }
         return deviance;
     }
 
@@ -118,7 +136,11 @@ public final class FitResult {
     }
 
     /** @return human-readable cautions (parameters on a bound, target not reached, too few cells) */
-    public List<String> warnings() {
+    public synchronized List<String> warnings() {
+        if (warnings == null) {
+            warnings = List.copyOf(warningSource.get());
+            warningSource = null;
+        }
         return warnings;
     }
 
@@ -130,6 +152,6 @@ public final class FitResult {
     @Override
     public String toString() {
         return "FitResult[" + function + ", threshold " + threshold + " at psi " + targetPsi + ", slope " + slope
-                + ", lnL " + logLikelihood + ", D " + deviance + "]";
+                + ", lnL " + logLikelihood() + ", D " + deviance() + "]";
     }
 }

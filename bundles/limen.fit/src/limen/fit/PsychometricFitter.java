@@ -118,11 +118,17 @@ public final class PsychometricFitter {
             double v = objective.value(c);
             boolean clean = cleanInteriorOptimum(objective, c, v);
             // cheapest check first: the structure of c, the start grid, then the climbs from the other starts
-            if ((clean || steepEnd(objective, c, v)) && !(min(gridValues(objective, data, grid)) < v)
-                    && !betterFromStep(objective, c, v) && !betterFromGrid(objective, data, grid, c, v)) {
-                c = normalForm(objective, c);
-                PsychometricFunction f = objective.function(c);
-                return new FitResult(data, options, f, warnings(objective, c, f, data), objective.evaluations(), false, true);
+            if (clean || steepEnd(objective, c, v)) {
+                double[][] points = grid(objective, data, grid);
+                double[] values = gridValues(objective, data, grid, points);
+                if (!(min(values) < v) && !betterFromStep(objective, c, v) && !betterFromGrid(objective, points, values, c, v)) {
+                    c = normalForm(objective, c);
+                    PsychometricFunction f = objective.function(c);
+                    double[] at = c;
+                    // asked for only where someone reads them (not by the bootstrap); the objective is not used again
+                    return new FitResult(data, options, f, () -> warnings(objective, at, f, data), objective.evaluations(),
+                            false, true);
+                }
             }
         }
         return fit(data, warm, false, grid);
@@ -143,6 +149,8 @@ public final class PsychometricFitter {
         private final double[] values;
         private final int[] trials;
         private final java.util.concurrent.ConcurrentHashMap<java.util.List<Double>, double[][]> terms = new java.util.concurrent.ConcurrentHashMap<>();
+        /** {@link #grid} by the grid's guess and lapse (the points do not depend on the counts). */
+        private final java.util.concurrent.ConcurrentHashMap<java.util.List<Double>, double[][]> points = new java.util.concurrent.ConcurrentHashMap<>();
 
         GridCache(BinomialData design) {
             this.values = design.values();
@@ -150,9 +158,11 @@ public final class PsychometricFitter {
         }
     }
 
-    /** @return −ln L at every point of {@link #grid}, through {@code cache} when it fits the data */
-    private double[] gridValues(Objective objective, BinomialData data, GridCache cache) {
-        double[][] points = grid(objective, data);
+    /**
+     * @param points {@link #grid} of these data
+     * @return −ln L at every point of {@link #grid}, through {@code cache} when it fits the data
+     */
+    private double[] gridValues(Objective objective, BinomialData data, GridCache cache, double[][] points) {
         double[] v = new double[points.length];
         if (cache != null && objective.sameDesign(cache.values, cache.trials)) {
             double[] gl = gridGuessLapse(data);
@@ -241,9 +251,7 @@ public final class PsychometricFitter {
      * @return whether that climb ends higher than c by more than {@value #FLAT_LOG_LIKELIHOOD} in ln L (a
      *         better, smoother optimum elsewhere: the full search decides)
      */
-    private boolean betterFromGrid(Objective objective, BinomialData data, GridCache cache, double[] c, double v) {
-        double[][] points = grid(objective, data);
-        double[] values = gridValues(objective, data, cache);
+    private static boolean betterFromGrid(Objective objective, double[][] points, double[] values, double[] c, double v) {
         int other = -1;
         for (int i = 0; i < points.length; i++) {
             if (distance(points[i], c) >= DISTINCT_START && (other < 0 || values[i] < values[other])) {
@@ -347,10 +355,10 @@ public final class PsychometricFitter {
      *         {@value #DISTINCT_START} working units from it (absent when every point is closer)
      */
     private double[][] starts(Objective objective, BinomialData data, PsychometricFunction extraStart, GridCache cache) {
-        double[][] grid = grid(objective, data);
+        double[][] grid = grid(objective, data, cache);
         int count = grid.length + (extraStart == null ? 0 : 1);
         double[][] points = java.util.Arrays.copyOf(grid, count);
-        double[] values = java.util.Arrays.copyOf(gridValues(objective, data, cache), count);
+        double[] values = java.util.Arrays.copyOf(gridValues(objective, data, cache, grid), count);
         if (extraStart != null) {
             points[count - 1] = objective.coordinates(extraStart);
             values[count - 1] = objective.value(points[count - 1]);
@@ -370,9 +378,19 @@ public final class PsychometricFitter {
         return second < 0 ? new double[][] { points[first] } : new double[][] { points[first], points[second] };
     }
 
-    /** @return the {@value #GRID_LOCATIONS} × {@value #GRID_SCALES} start points in working coordinates */
-    private double[][] grid(Objective objective, BinomialData data) {
+    /**
+     * @return the {@value #GRID_LOCATIONS} × {@value #GRID_SCALES} start points in working coordinates, shared
+     *         through {@code cache} where there is one (callers do not modify them)
+     */
+    private double[][] grid(Objective objective, BinomialData data, GridCache cache) {
+        if (cache == null) {
+            return grid(objective, gridGuessLapse(data));
+        }
         double[] gl = gridGuessLapse(data);
+        return cache.points.computeIfAbsent(java.util.List.of(gl[0], gl[1]), key -> grid(objective, gl));
+    }
+
+    private double[][] grid(Objective objective, double[] gl) {
         double guess0 = gl[0];
         double lapse0 = gl[1];
         double[][] points = new double[GRID_LOCATIONS * GRID_SCALES][];

@@ -70,6 +70,41 @@ class ObjectiveTest {
         }
     }
 
+    /**
+     * The score reuses the family's values from the last {@link Objective#value} only at that very point: after
+     * value at the same point, at another point, and at an array changed in place since, it is the same double
+     * for double as a fresh objective's (which evaluates the family itself).
+     */
+    @Test
+    void scoreReusesTheLastEvaluationOnlyAtItsPoint() {
+        FitOptions o = FitOptions.of(Sigmoids.LOGISTIC).withGuess(0.5).withLapseMax(0.06);
+        double[] c = { -0.4, -2.5, 0.3 };
+        double[] other = { 0.1, -1.0, 0.6 };
+        Objective reused = new Objective(TRACK, o);
+        double[] moving = c.clone();
+        reused.value(moving);
+        assertSameScore(new Objective(TRACK, o), reused, c, "after value at the same point");
+        reused.value(other);
+        assertSameScore(new Objective(TRACK, o), reused, c, "after value at another point");
+        reused.value(moving);
+        moving[1] = -1.7; // the caller's array changed after the evaluation
+        assertSameScore(new Objective(TRACK, o), reused, moving, "after the evaluated array changed");
+    }
+
+    private static void assertSameScore(Objective fresh, Objective reused, double[] c, String where) {
+        double[] s1 = new double[3];
+        double[] s2 = new double[3];
+        double[][] e1 = new double[3][3];
+        double[][] e2 = new double[3][3];
+        double[][] o1 = new double[3][3];
+        double[][] o2 = new double[3][3];
+        fresh.scoreAndInformation(c, s1, e1, o1);
+        reused.scoreAndInformation(c.clone(), s2, e2, o2);
+        assertTrue(java.util.Arrays.equals(s1, s2), "score " + where);
+        assertTrue(java.util.Arrays.deepEquals(e1, e2), "expected information " + where);
+        assertTrue(java.util.Arrays.deepEquals(o1, o2), "observed information " + where);
+    }
+
     private static void checkDerivatives(Objective obj, double[] c, String where) {
         int dim = obj.dimension();
         double[] score = new double[dim];

@@ -44,6 +44,14 @@ public final class Objective implements MultivariateFunction {
     private final FitOptions options;
     private final int dimension;
     private long evaluations;
+    /**
+     * The family's F, 1 − F, F_u and F_uu at every cell for the point {@link #value} last evaluated
+     * ({@code evaluatedAt}): a climb asks for the score where its line search has just accepted a point, and
+     * reads them back instead of evaluating the family again. The same doubles, so the same results.
+     */
+    private final double[] evaluated;
+    private final double[] evaluatedAt;
+    private boolean evaluatedValid;
 
     /**
      * @throws IllegalArgumentException for a family that is neither location-scale nor the Weibull, for
@@ -77,6 +85,8 @@ public final class Objective implements MultivariateFunction {
         this.centre = 0.5 * (lo + hi);
         this.range = hi - lo;
         this.dimension = options.freeParameters();
+        this.evaluated = new double[4 * x.length];
+        this.evaluatedAt = new double[dimension];
     }
 
     /** @return 2, 3 or 4 */
@@ -117,8 +127,14 @@ public final class Objective implements MultivariateFunction {
         double r = 1 - g - l;
         double sum = 0;
         double[] e = new double[4];
+        double[] cells = evaluated;
         for (int i = 0; i < u.length; i++) {
             working.evaluate(u[i], m, s, e);
+            int b = 4 * i;
+            cells[b] = e[0];
+            cells[b + 1] = e[1];
+            cells[b + 2] = e[2];
+            cells[b + 3] = e[3];
             int ki = k[i];
             int misses = n[i] - ki;
             if (ki > 0) {
@@ -128,7 +144,23 @@ public final class Objective implements MultivariateFunction {
                 sum += misses * Math.log(Math.max(l + r * e[1], Double.MIN_NORMAL));
             }
         }
+        System.arraycopy(c, 0, evaluatedAt, 0, dimension);
+        evaluatedValid = true;
         return -sum;
+    }
+
+    /** @return whether {@link #evaluated} holds the family at c (the point value() saw last) */
+    private boolean evaluatedAt(double[] c) {
+        if (!evaluatedValid) {
+            return false;
+        }
+        for (int j = 0; j < dimension; j++) {
+            // bitwise, so that -0.0 and 0.0 or two NaNs are not confused with each other
+            if (Double.doubleToRawLongBits(c[j]) != Double.doubleToRawLongBits(evaluatedAt[j])) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**
@@ -330,13 +362,27 @@ public final class Objective implements MultivariateFunction {
         double e00 = 0, e10 = 0, e11 = 0, eG0 = 0, eG1 = 0, eGG = 0, eL0 = 0, eL1 = 0, eLG = 0, eLL = 0;
         double o00 = 0, o10 = 0, o11 = 0, oG0 = 0, oG1 = 0, oGG = 0, oL0 = 0, oL1 = 0, oLG = 0, oLL = 0;
         double[] e = new double[4];
+        double[] cells = evaluatedAt(c) ? evaluated : null;
         for (int i = 0; i < u.length; i++) {
-            working.evaluate(u[i], mU, s, e);
-            double f = e[0];
-            double fc = e[1];
+            double f;
+            double fc;
+            double fu;
+            double fuu;
+            if (cells != null) {
+                int b = 4 * i;
+                f = cells[b];
+                fc = cells[b + 1];
+                fu = cells[b + 2];
+                fuu = cells[b + 3];
+            } else {
+                working.evaluate(u[i], mU, s, e);
+                f = e[0];
+                fc = e[1];
+                fu = e[2];
+                fuu = e[3];
+            }
             double psi = g + r * f;
             double q = l + r * fc;
-            double fu = e[2];
             double du = u[i] - mU;
             double f0 = -range * fu;
             double f1 = -du * fu;
@@ -369,7 +415,6 @@ public final class Objective implements MultivariateFunction {
             eLG += wG * dL;
             eLL += w * dL * dL;
             if (wantObserved) {
-                double fuu = e[3];
                 double curvature;
                 if (psi * q >= Double.MIN_NORMAL) {
                     double invPsi = q * inv;
