@@ -34,6 +34,28 @@ class QuantilesTest {
         assertEquals(Double.POSITIVE_INFINITY, Quantiles.biasCorrection(sorted, 9), 0);
     }
 
+    /**
+     * Replicates equal to the estimate up to the fits' accuracy (as on a ridge toward a step, where many refits
+     * end on the estimate's value by different paths, 1e-8 apart) count half whichever side that puts them (ties
+     * half: common practice): z0 does not move when the estimate moves by as much. Here 2 below, 4 tied, 2
+     * above: p = 1/2.
+     */
+    @Test
+    void tiesWithinTheFitsAccuracyCountHalf() {
+        double t = 0.8262168559894514;
+        double[] sorted = { 0.5, 0.7, t - 1.6e-8, t - 1e-14, t, t + 1.5e-8, 1.0, 1.6 };
+        for (double estimate : new double[] { t, t - 2e-12, t + 2e-8 }) {
+            assertEquals(0.0, Quantiles.biasCorrection(sorted, estimate), 1e-15, "estimate " + estimate);
+        }
+        // beyond the width (1e-6 of the range 1.1) the order counts again: 6 of 8 below, Φ⁻¹(3/4) from Commons
+        // Math's normal distribution
+        org.apache.commons.math3.distribution.NormalDistribution normal = new org.apache.commons.math3.distribution.NormalDistribution();
+        assertEquals(normal.inverseCumulativeProbability(0.75), Quantiles.biasCorrection(sorted, t + 1e-4), 1e-15);
+        // 2 below, 1 tied (0.7): p = 2.5/8
+        assertEquals(normal.inverseCumulativeProbability(2.5 / 8),
+                Quantiles.biasCorrection(new double[] { 0.5, 0.6, 0.7, 0.8, 0.9, 1.0, 1.1, 1.2 }, 0.7), 1e-15);
+    }
+
     /** The weighted jackknife acceleration equals the plain formula on the values repeated by their weights. */
     @Test
     void weightedAccelerationEqualsExpandedJackknife() {

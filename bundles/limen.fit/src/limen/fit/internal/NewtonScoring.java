@@ -36,6 +36,14 @@ public final class NewtonScoring {
     private static final double MAX_STEP = 0.5;
     /** Gain of ln L over {@value #STALL_WINDOW} iterations below which the climb stops (a flat ridge). */
     private static final double STALL_GAIN = 1e-10;
+    /**
+     * Largest component (working units) of a Newton step (J positive definite) that ends the climb: the step is
+     * taken without a line search and the climb returns. Newton converges quadratically there, so the point
+     * is the optimum to about the square of this; ln L no longer changes in double precision, and a line
+     * search would only halve steps that rounding cannot tell apart, while on a flat ridge the score can stay
+     * far above {@link #SCORE_TOLERANCE} (Nocedal &amp; Wright 2006, Numerical Optimization, 2nd ed., Theorem 3.5).
+     */
+    private static final double NEWTON_STEP = 1e-6;
     /** Largest move (working units) over {@value #STALL_WINDOW} stalled iterations that still counts as converged. */
     private static final double STALLED_MOVE = 1e-6;
     /**
@@ -131,6 +139,13 @@ public final class NewtonScoring {
                 return c; // every coordinate at a bound it presses against, or a stationary point
             }
             double[] step = solve(observed, score, held, free, ws);
+            if (step != null && maxAbs(step) < NEWTON_STEP) {
+                // J positive definite and a tiny Newton step: its end is the optimum to rounding
+                for (int j = 0; j < dim; j++) {
+                    c[j] = Math.max(lo[j], Math.min(hi[j], c[j] + step[j]));
+                }
+                return c;
+            }
             if (step == null) {
                 step = modifiedNewton(observed, expected, score, held, free, ws);
             }
