@@ -116,13 +116,16 @@ public final class PsychometricFitter {
         double[] c = NewtonScoring.converge(objective, objective.coordinates(warm));
         if (c != null) {
             double v = objective.value(c);
-            boolean clean = cleanInteriorOptimum(objective, c, v);
+            double[] steepest = c.clone();
+            steepest[1] = objective.lowerBounds()[1];
+            double vSteepest = objective.value(steepest);
+            boolean clean = cleanInteriorOptimum(objective, c, v, vSteepest);
             // cheapest check first: the structure of c, the start grid, then the climbs from the other starts
             if (clean || steepEnd(objective, c, v)) {
                 double[][] points = grid(objective, data, grid);
                 double[] values = gridValues(objective, data, grid, points);
                 if (!(min(values) < v) && !betterFromStep(objective, c, v) && !betterFromGrid(objective, points, values, c, v)) {
-                    c = normalForm(objective, c);
+                    c = normalForm(objective, c, v, vSteepest);
                     PsychometricFunction f = objective.function(c);
                     double[] at = c;
                     // asked for only where someone reads them (not by the bootstrap); the objective is not used again
@@ -207,11 +210,20 @@ public final class PsychometricFitter {
         if (c == null) {
             return null;
         }
-        double v = objective.value(c);
+        double[] steep = c.clone();
+        steep[1] = objective.lowerBounds()[1];
+        return normalForm(objective, c, objective.value(c), objective.value(steep));
+    }
+
+    /**
+     * @param v          −ln L at c
+     * @param vSteepest  −ln L at c with the scale on its lower bound
+     */
+    private static double[] normalForm(Objective objective, double[] c, double v, double vSteepest) {
         double[] lo = objective.lowerBounds();
         double[] steep = c.clone();
         steep[1] = lo[1];
-        if (c[1] > lo[1] && !(objective.value(steep) <= v + NORMAL_FORM_FLAT)) {
+        if (c[1] > lo[1] && !(vSteepest <= v + NORMAL_FORM_FLAT)) {
             // a curved ridge: the location follows the scale; only where the profile is flat in the scale
             if (!(Math.abs(NewtonScoring.scaleProfileCurvature(objective, c)) < FLAT_PROFILE_CURVATURE)) {
                 return c;
@@ -279,7 +291,8 @@ public final class PsychometricFitter {
         return p != null && objective.value(p) < v - FLAT_LOG_LIKELIHOOD;
     }
 
-    private static boolean cleanInteriorOptimum(Objective objective, double[] c, double v) {
+    /** @param vSteepest −ln L at c with the scale on its lower bound */
+    private static boolean cleanInteriorOptimum(Objective objective, double[] c, double v, double vSteepest) {
         if (!Double.isFinite(v)) {
             return false;
         }
@@ -295,9 +308,7 @@ public final class PsychometricFitter {
                 return false;
             }
         }
-        double[] steepest = c.clone();
-        steepest[1] = lo[1];
-        return objective.value(steepest) > v + FLAT_LOG_LIKELIHOOD;
+        return vSteepest > v + FLAT_LOG_LIKELIHOOD;
     }
 
     /** @param derivativeFreeOnly skip Newton/scoring (tests compare the two optimisers) */
