@@ -98,7 +98,8 @@ public final class PsychometricFitter {
      * the full search's other starts (the best step, the best grid point at least {@value #DISTINCT_START}
      * from it) do not end higher; those climbs stop as soon as they reach the warm optimum's basin. Otherwise
      * the full search {@link #fit(BinomialData, PsychometricFunction)} with {@code warm} as its extra start
-     * decides. Adaptive tracks can have several modes (a steep function with a lapse beside a shallower one
+     * decides, taking the ends of the climbs made here (from {@code warm}, and from a start whose climb ended
+     * higher) instead of repeating them. Adaptive tracks can have several modes (a steep function with a lapse beside a shallower one
      * without), which is why the other starts are climbed too. A free γ or λ may end on its bound (the
      * projected method holds it there when the score presses outward). BootstrapWarmStartTest checks on many
      * replicates that both paths reach the same optimum.
@@ -113,8 +114,12 @@ public final class PsychometricFitter {
      */
     FitResult refit(BinomialData data, PsychometricFunction warm, GridCache grid) {
         Objective objective = new Objective(data, options);
-        double[] c = NewtonScoring.converge(objective, objective.coordinates(warm));
+        double[] warmStart = objective.coordinates(warm);
+        double[] c = NewtonScoring.converge(objective, warmStart);
+        // climbs made here that the full search would repeat: it takes their ends instead
+        List<Climbed> climbed = new ArrayList<>(3);
         if (c != null) {
+            climbed.add(new Climbed(warmStart, c));
             double v = objective.value(c);
             double[] steepest = c.clone();
             steepest[1] = objective.lowerBounds()[1];
@@ -124,7 +129,8 @@ public final class PsychometricFitter {
             if (clean || steepEnd(objective, c, v)) {
                 double[][] points = grid(objective, data, grid);
                 double[] values = gridValues(objective, data, grid, points);
-                if (!(min(values) < v) && !betterFromStep(objective, c, v) && !betterFromGrid(objective, points, values, c, v)) {
+                if (!(min(values) < v) && !betterFromStep(objective, c, v, climbed)
+                        && !betterFromGrid(objective, points, values, c, v, climbed)) {
                     c = normalForm(objective, c, v, vSteepest);
                     PsychometricFunction f = objective.function(c);
                     double[] at = c;
@@ -134,7 +140,17 @@ public final class PsychometricFitter {
                 }
             }
         }
-        return fit(data, warm, false, grid);
+        return fit(data, warm, false, grid, climbed);
+    }
+
+    /**
+     * A climb already made on the same data: from {@code start} (working coordinates) to {@code end}. Only
+     * climbs that ran to their end (not stopped early in another optimum's basin) are recorded, so the full
+     * search loses nothing by taking the end instead of climbing again: from the same start the climb takes
+     * the same path, and where it would stop early in its best-so-far's basin, the recorded end is as high or
+     * higher.
+     */
+    private record Climbed(double[] start, double[] end) {
     }
 
     /** @return a cache of start-grid terms for refits of data with the values and trials of {@code design} */
@@ -263,7 +279,8 @@ public final class PsychometricFitter {
      * @return whether that climb ends higher than c by more than {@value #FLAT_LOG_LIKELIHOOD} in ln L (a
      *         better, smoother optimum elsewhere: the full search decides)
      */
-    private static boolean betterFromGrid(Objective objective, double[][] points, double[] values, double[] c, double v) {
+    private static boolean betterFromGrid(Objective objective, double[][] points, double[] values, double[] c, double v,
+            List<Climbed> climbed) {
         int other = -1;
         for (int i = 0; i < points.length; i++) {
             if (distance(points[i], c) >= DISTINCT_START && (other < 0 || values[i] < values[other])) {
@@ -274,7 +291,11 @@ public final class PsychometricFitter {
             return false;
         }
         double[] p = NewtonScoring.maximise(objective, points[other], c);
-        return p != null && objective.value(p) < v - FLAT_LOG_LIKELIHOOD;
+        boolean better = p != null && objective.value(p) < v - FLAT_LOG_LIKELIHOOD;
+        if (better) {
+            climbed.add(new Climbed(points[other], p)); // higher than c: not stopped in c's basin
+        }
+        return better;
     }
 
     /**
@@ -282,13 +303,17 @@ public final class PsychometricFitter {
      *         than c by more than {@value #FLAT_LOG_LIKELIHOOD} in ln L: a mode at the steep end, e.g. a steep
      *         function with a lapse where c is a shallow one without
      */
-    private static boolean betterFromStep(Objective objective, double[] c, double v) {
+    private static boolean betterFromStep(Objective objective, double[] c, double v, List<Climbed> climbed) {
         double[] start = objective.stepStart();
         if (start == null) {
             return false;
         }
         double[] p = NewtonScoring.maximise(objective, start, c);
-        return p != null && objective.value(p) < v - FLAT_LOG_LIKELIHOOD;
+        boolean better = p != null && objective.value(p) < v - FLAT_LOG_LIKELIHOOD;
+        if (better) {
+            climbed.add(new Climbed(start, p)); // higher than c: not stopped in c's basin
+        }
+        return better;
     }
 
     /** @param vSteepest −ln L at c with the scale on its lower bound */
@@ -313,10 +338,12 @@ public final class PsychometricFitter {
 
     /** @param derivativeFreeOnly skip Newton/scoring (tests compare the two optimisers) */
     FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly) {
-        return fit(data, extraStart, derivativeFreeOnly, null);
+        return fit(data, extraStart, derivativeFreeOnly, null, List.of());
     }
 
-    private FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly, GridCache grid) {
+    /** @param climbed climbs already made on these data (by a refit), taken instead of climbing again */
+    private FitResult fit(BinomialData data, PsychometricFunction extraStart, boolean derivativeFreeOnly, GridCache grid,
+            List<Climbed> climbed) {
         Objective objective = new Objective(data, options);
         double[][] starts = allStarts(objective, data, extraStart, grid);
         double[] best = null;
@@ -324,7 +351,10 @@ public final class PsychometricFitter {
         boolean bestDerivativeFree = false;
         if (!derivativeFreeOnly) {
             for (double[] start : starts) {
-                double[] p = NewtonScoring.maximise(objective, start, best);
+                double[] p = endOf(climbed, start);
+                if (p == null) {
+                    p = NewtonScoring.maximise(objective, start, best);
+                }
                 double v = p == null ? Double.POSITIVE_INFINITY : objective.value(p);
                 if (v < bestValue) {
                     best = p;
@@ -347,6 +377,16 @@ public final class PsychometricFitter {
         best = normalForm(objective, best);
         PsychometricFunction f = objective.function(best);
         return new FitResult(data, options, f, warnings(objective, best, f, data), objective.evaluations(), bestDerivativeFree);
+    }
+
+    /** @return the end of the recorded climb from exactly this start, or null */
+    private static double[] endOf(List<Climbed> climbed, double[] start) {
+        for (Climbed k : climbed) {
+            if (Arrays.equals(k.start(), start)) {
+                return k.end();
+            }
+        }
+        return null;
     }
 
     /** @return {@link #starts} and {@link Objective#stepStart} where there is one */
