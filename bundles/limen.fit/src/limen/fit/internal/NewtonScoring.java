@@ -32,6 +32,7 @@ public final class NewtonScoring {
     private static final double SCORE_TOLERANCE = 1e-9;
     private static final double ASCENT_STEP = 0.05;
     private static final int STALL_WINDOW = 5;
+    private static final int HISTORY = STALL_WINDOW + 1;
     /** Longest step (largest component, in working units) tried before halving. */
     private static final double MAX_STEP = 0.5;
     /** Gain of ln L over {@value #STALL_WINDOW} iterations below which the climb stops (a flat ridge). */
@@ -106,24 +107,25 @@ public final class NewtonScoring {
         double[][] expected = new double[dim][dim];
         double[][] observed = new double[dim][dim];
         double[] trial = new double[dim];
-        double[] history = new double[MAX_ITERATIONS + 1];
+        // −ln L at the start of the last STALL_WINDOW + 1 iterations (ring: iteration i at i % HISTORY)
+        double[] history = new double[HISTORY];
         Workspace ws = new Workspace(dim);
         boolean[] held = new boolean[dim];
         history[0] = value;
         // iterates of the last STALL_WINDOW + 1 iterations (ring), to tell a converged stall from a creep
-        double[][] recent = convergedOnly ? new double[STALL_WINDOW + 1][] : null;
+        double[][] recent = convergedOnly ? new double[HISTORY][dim] : null;
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
             if (recent != null) {
-                recent[iteration % recent.length] = c.clone();
+                System.arraycopy(c, 0, recent[iteration % HISTORY], 0, dim);
             }
-            if (iteration >= STALL_WINDOW && history[iteration - STALL_WINDOW] - value < STALL_GAIN) {
+            if (iteration >= STALL_WINDOW && history[(iteration - STALL_WINDOW) % HISTORY] - value < STALL_GAIN) {
                 // a ridge along which ln L still creeps up (a near-step function): no data can tell these apart;
                 // or an optimum where the last steps gain only rounding, which a warm start accepts when the
                 // iterate has stopped moving
                 if (!convergedOnly) {
                     return c;
                 }
-                double[] before = recent[(iteration - STALL_WINDOW) % recent.length];
+                double[] before = recent[(iteration - STALL_WINDOW) % HISTORY];
                 return distance(c, before) < STALLED_MOVE ? c : null;
             }
             objective.scoreAndInformation(c, score, expected, observed);
@@ -155,7 +157,7 @@ public final class NewtonScoring {
             }
             boolean singular = step == null;
             if (jumps > 0 && score[1] < 0 && c[1] > lo[1] && (singular || (step[1] < 0 && iteration >= STALL_WINDOW
-                    && history[iteration - STALL_WINDOW] - value < RIDGE_GAIN))) {
+                    && history[(iteration - STALL_WINDOW) % HISTORY] - value < RIDGE_GAIN))) {
                 // on a ridge toward a step, where the information is singular (one cell holds the function) or
                 // the climb creeps: try the ridge's end, at the steepest allowed function
                 jumps--;
@@ -209,7 +211,7 @@ public final class NewtonScoring {
                     }
                 }
             }
-            history[iteration + 1] = value;
+            history[(iteration + 1) % HISTORY] = value;
             if (!improved) {
                 // no decrease along the step: at an optimum only if the step was already tiny (rounding)
                 return size < 1e-7 ? c : null;
