@@ -67,7 +67,8 @@ public final class Bootstrap {
         double[] slopes = new double[b];
         double[] deviances = options.goodnessOfFit() ? new double[b] : null;
         PsychometricFunction generating = fit.function();
-        // replicates keep the values and trials of the data: they share the start grid's log terms
+        // replicates keep the values of the data (and jackknife sets do, except where they empty a cell): they
+        // share the start grid's log terms
         PsychometricFitter.GridCache grid = fitter.gridCache(data);
         runner.run(b, i -> {
             BinomialData replicate = simulate(data, generating, options.nonparametric(), Seeds.derive(options.seed(), STREAM_REPLICATES, i));
@@ -88,7 +89,7 @@ public final class Bootstrap {
         double[] jackThresholds = new double[jackknife.size()];
         double[] jackSlopes = new double[jackknife.size()];
         runner.run(jackknife.size(), j -> {
-            FitResult r = fitter.refit(jackknife.get(j), generating);
+            FitResult r = fitter.refit(jackknife.get(j), generating, grid); // the same values, unless a cell goes
             jackThresholds[j] = r.threshold();
             jackSlopes[j] = r.slope();
         });

@@ -153,27 +153,25 @@ public final class PsychometricFitter {
     private record Climbed(double[] start, double[] end) {
     }
 
-    /** @return a cache of start-grid terms for refits of data with the values and trials of {@code design} */
+    /** @return a cache of start-grid terms for refits of data with the stimulus values of {@code design} */
     GridCache gridCache(BinomialData design) {
         return new GridCache(design);
     }
 
     /**
-     * The start grid's {@link Objective#logTerms} for one design (values and trials), by the grid's guess and
+     * The start grid's {@link Objective#logTerms} for one set of stimulus values, by the grid's guess and
      * lapse (which follow the smallest and largest proportions, so a bootstrap meets only a few). Turns the
      * grid's {@value #GRID_LOCATIONS} × {@value #GRID_SCALES} likelihood evaluations of each refit into dot
      * products with the counts. Thread-safe.
      */
     static final class GridCache {
         private final double[] values;
-        private final int[] trials;
         private final java.util.concurrent.ConcurrentHashMap<java.util.List<Double>, double[][]> terms = new java.util.concurrent.ConcurrentHashMap<>();
         /** {@link #grid} by the grid's guess and lapse (the points do not depend on the counts). */
         private final java.util.concurrent.ConcurrentHashMap<java.util.List<Double>, double[][]> points = new java.util.concurrent.ConcurrentHashMap<>();
 
         GridCache(BinomialData design) {
             this.values = design.values();
-            this.trials = design.trials();
         }
     }
 
@@ -183,7 +181,7 @@ public final class PsychometricFitter {
      */
     private double[] gridValues(Objective objective, BinomialData data, GridCache cache, double[][] points) {
         double[] v = new double[points.length];
-        if (cache != null && objective.sameDesign(cache.values, cache.trials)) {
+        if (cache != null && objective.sameValues(cache.values)) {
             double[] gl = gridGuessLapse(data);
             double[][] t = cache.terms.computeIfAbsent(java.util.List.of(gl[0], gl[1]), key -> {
                 double[][] all = new double[points.length][];

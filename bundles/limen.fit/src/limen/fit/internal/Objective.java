@@ -165,8 +165,9 @@ public final class Objective implements MultivariateFunction {
 
     /**
      * The per-cell logarithms that {@link #value} weights by the counts: ln ψ_i and ln(1 − ψ_i) at c (each
-     * guarded below by ln of the smallest normal double, as there). They do not depend on the correct counts
-     * k_i, so data sets with the same values and trials (bootstrap replicates) can share them.
+     * guarded below by ln of the smallest normal double, as there). They do not depend on the counts n_i and
+     * k_i, so data sets with the same values (bootstrap replicates, jackknife sets that keep every cell) can
+     * share them.
      *
      * @return {ln ψ_0, ln(1 − ψ_0), ln ψ_1, ...}
      */
@@ -322,9 +323,12 @@ public final class Objective implements MultivariateFunction {
         return count == 0 ? 0 : count * Math.log(p);
     }
 
-    /** @return whether these are the stimulus values and trial counts of this objective's data */
-    public boolean sameDesign(double[] values, int[] trials) {
-        return java.util.Arrays.equals(x, values) && java.util.Arrays.equals(n, trials);
+    /**
+     * @return whether these are the stimulus values of this objective's data (then {@link #logTerms}, which
+     *         depend on the values alone, not on the trials or correct counts, carry over)
+     */
+    public boolean sameValues(double[] values) {
+        return java.util.Arrays.equals(x, values);
     }
 
     /**
