@@ -86,6 +86,9 @@ class JournalTest {
         JournalContents c = JournalReader.read(file);
         assertEquals(Integrity.TORN_TAIL, c.integrity());
         assertEquals(7, c.lastSeq());
+        // the good part ends where the torn row starts: the bytes before it, counted row by row
+        int tornStart = text.lastIndexOf('\n', text.length() - 2) + 1;
+        assertEquals(text.substring(0, tornStart).getBytes(StandardCharsets.UTF_8).length, c.goodBytes());
         try (JournalWriter w = JournalWriter.resume(file, c)) {
             assertEquals(8, w.nextSeq());
             w.append(row(8, 0.5));
