@@ -288,7 +288,7 @@ public final class PsychometricFitter {
         if (other < 0) {
             return false;
         }
-        double[] p = NewtonScoring.maximise(objective, points[other], c);
+        double[] p = NewtonScoring.maximise(objective, points[other], values[other], c);
         boolean better = p != null && objective.value(p) < v - FLAT_LOG_LIKELIHOOD;
         if (better) {
             climbed.add(new Climbed(points[other], p)); // higher than c: not stopped in c's basin

@@ -67,7 +67,15 @@ public final class NewtonScoring {
      * @return the maximiser in working coordinates, or null when the method failed
      */
     public static double[] maximise(Objective objective, double[] start, double[] known) {
-        return climb(objective, start, known, false);
+        return climb(objective, start, known, false, MAX_JUMPS, false, Double.NaN);
+    }
+
+    /**
+     * {@link #maximise(Objective, double[], double[])} from a start inside the box whose −ln L the caller has
+     * already (e.g. from shared log terms that give the same double as {@link Objective#value}).
+     */
+    public static double[] maximise(Objective objective, double[] start, double startValue, double[] known) {
+        return climb(objective, start, known, false, MAX_JUMPS, false, startValue);
     }
 
     /**
@@ -86,23 +94,26 @@ public final class NewtonScoring {
     }
 
     private static double[] climb(Objective objective, double[] start, double[] known, boolean convergedOnly) {
-        return climb(objective, start, known, convergedOnly, MAX_JUMPS, false);
+        return climb(objective, start, known, convergedOnly, MAX_JUMPS, false, Double.NaN);
     }
 
     /**
      * @param jumps     attempts left at {@link #steepEnd} (a climb started there makes none)
      * @param holdScale keep the scale coordinate where it starts (the steep end's first climb)
+     * @param startValue −ln L at start, or NaN to evaluate it (used only where start lies inside the box)
      */
     private static double[] climb(Objective objective, double[] start, double[] known, boolean convergedOnly, int jumps,
-            boolean holdScale) {
+            boolean holdScale, double startValue) {
         int dim = objective.dimension();
         double[] lo = objective.lowerBounds();
         double[] hi = objective.upperBounds();
         double[] c = start.clone();
+        boolean inside = true;
         for (int j = 0; j < dim; j++) {
             c[j] = Math.max(lo[j], Math.min(hi[j], c[j]));
+            inside &= c[j] == start[j];
         }
-        double value = objective.value(c);
+        double value = inside && !Double.isNaN(startValue) ? startValue : objective.value(c);
         double[] score = new double[dim];
         double[][] expected = new double[dim][dim];
         double[][] observed = new double[dim][dim];
@@ -225,7 +236,7 @@ public final class NewtonScoring {
      *         (location and free rates re-optimised), or null when that climb fails
      */
     public static double[] atSteepEnd(Objective objective, double[] c) {
-        return climb(objective, objective.steepEndOfRidge(c), null, false, 0, true);
+        return climb(objective, objective.steepEndOfRidge(c), null, false, 0, true, Double.NaN);
     }
 
     /**
@@ -280,11 +291,11 @@ public final class NewtonScoring {
     private static double[] steepEnd(Objective objective, double[] c, double value, boolean convergedOnly) {
         // along the ridge the location follows the scale: start where the cell that holds the function keeps
         // its place on it, then the other coordinates with the scale held
-        double[] end = climb(objective, objective.steepEndOfRidge(c), null, false, 0, true);
+        double[] end = climb(objective, objective.steepEndOfRidge(c), null, false, 0, true, Double.NaN);
         if (end == null || !(objective.value(end) <= value)) {
             return null;
         }
-        double[] free = climb(objective, end, null, convergedOnly, 0, false);
+        double[] free = climb(objective, end, null, convergedOnly, 0, false, Double.NaN);
         return free != null || convergedOnly ? free : end;
     }
 
