@@ -403,21 +403,28 @@ public final class Objective implements MultivariateFunction {
             double w = ni * inv;
             s0 += rho * d0;
             s1 += rho * d1;
-            sG += rho * dG;
-            sL += rho * dL;
             double w0 = w * d0;
             double w1 = w * d1;
             double wG = w * dG;
             e00 += w0 * d0;
             e10 += w1 * d0;
             e11 += w1 * d1;
-            eG0 += wG * d0;
-            eG1 += wG * d1;
-            eGG += wG * dG;
-            eL0 += w0 * dL;
-            eL1 += w1 * dL;
-            eLG += wG * dL;
-            eLL += w * dL * dL;
+            // the sums of a fixed rate are not used: skip them (nAFC fits fix the guess rate)
+            if (guessFree) {
+                sG += rho * dG;
+                eG0 += wG * d0;
+                eG1 += wG * d1;
+                eGG += wG * dG;
+            }
+            if (lapseFree) {
+                sL += rho * dL;
+                eL0 += w0 * dL;
+                eL1 += w1 * dL;
+                eLL += w * dL * dL;
+                if (guessFree) {
+                    eLG += wG * dL;
+                }
+            }
             if (wantObserved) {
                 double curvature;
                 if (psi * q >= Double.MIN_NORMAL) {
@@ -438,13 +445,19 @@ public final class Objective implements MultivariateFunction {
                 o00 += c0 * d0 - rho * r * range * range * fuu;
                 o10 += c1 * d0 - rho * r * range * cross;
                 o11 += c1 * d1 - rho * r * du * cross;
-                oG0 += cG * d0 + rho * gMax * f0;
-                oG1 += cG * d1 + rho * gMax * f1;
-                oGG += cG * dG;
-                oL0 += c0 * dL + rho * lMax * f0;
-                oL1 += c1 * dL + rho * lMax * f1;
-                oLG += cG * dL;
-                oLL += curvature * dL * dL;
+                if (guessFree) {
+                    oG0 += cG * d0 + rho * gMax * f0;
+                    oG1 += cG * d1 + rho * gMax * f1;
+                    oGG += cG * dG;
+                }
+                if (lapseFree) {
+                    oL0 += c0 * dL + rho * lMax * f0;
+                    oL1 += c1 * dL + rho * lMax * f1;
+                    oLL += curvature * dL * dL;
+                    if (guessFree) {
+                        oLG += cG * dL;
+                    }
+                }
             }
         }
         int gi = guessFree ? 2 : -1;
