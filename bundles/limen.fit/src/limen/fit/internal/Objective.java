@@ -52,6 +52,8 @@ public final class Objective implements MultivariateFunction {
     private final double[] evaluated;
     private final double[] evaluatedAt;
     private boolean evaluatedValid;
+    /** −ln L at {@code evaluatedAt}: asked for again at that point (a climb's end), value returns it. */
+    private double evaluatedValue;
 
     /**
      * @throws IllegalArgumentException for a family that is neither location-scale nor the Weibull, for
@@ -119,6 +121,9 @@ public final class Objective implements MultivariateFunction {
 
     @Override
     public double value(double[] c) {
+        if (evaluatedAt(c)) {
+            return evaluatedValue; // the same point as last time: the same double
+        }
         evaluations++;
         double m = workingLocation(c);
         double s = workingScale(c);
@@ -146,6 +151,7 @@ public final class Objective implements MultivariateFunction {
         }
         System.arraycopy(c, 0, evaluatedAt, 0, dimension);
         evaluatedValid = true;
+        evaluatedValue = -sum;
         return -sum;
     }
 
