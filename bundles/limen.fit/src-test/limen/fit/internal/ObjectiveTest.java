@@ -89,6 +89,13 @@ class ObjectiveTest {
         reused.value(moving);
         moving[1] = -1.7; // the caller's array changed after the evaluation
         assertSameScore(new Objective(TRACK, o), reused, moving, "after the evaluated array changed");
+        // value at the point it was last evaluated is that value again; at a changed array it is evaluated anew
+        double[] again = other.clone();
+        double first = reused.value(again);
+        assertEquals(new Objective(TRACK, o).value(other), first, 0.0);
+        assertEquals(first, reused.value(again), 0.0);
+        again[0] = 0.2;
+        assertEquals(new Objective(TRACK, o).value(again), reused.value(again), 0.0, "after the evaluated array changed");
     }
 
     private static void assertSameScore(Objective fresh, Objective reused, double[] c, String where) {
