@@ -89,7 +89,7 @@ public final class Bootstrap {
         double[] jackThresholds = new double[jackknife.size()];
         double[] jackSlopes = new double[jackknife.size()];
         runner.run(jackknife.size(), j -> {
-            FitResult r = fitter.refit(jackknife.get(j), generating, grid); // the same values, unless a cell goes
+            FitResult r = fitter.refit(jackknife.get(j), generating, grid); // unused where the set empties a cell
             jackThresholds[j] = r.threshold();
             jackSlopes[j] = r.slope();
         });

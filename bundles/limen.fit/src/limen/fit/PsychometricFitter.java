@@ -99,8 +99,8 @@ public final class PsychometricFitter {
      * from it) do not end higher; those climbs stop as soon as they reach the warm optimum's basin. Otherwise
      * the full search {@link #fit(BinomialData, PsychometricFunction)} with {@code warm} as its extra start
      * decides, taking the ends of the climbs made here (from {@code warm}, and from a start whose climb ended
-     * higher) instead of repeating them. Adaptive tracks can have several modes (a steep function with a lapse beside a shallower one
-     * without), which is why the other starts are climbed too. A free γ or λ may end on its bound (the
+     * higher) instead of repeating them. Adaptive tracks can have several modes (a steep function with a lapse
+     * beside a shallower one without), which is why the other starts are climbed too. A free γ or λ may end on its bound (the
      * projected method holds it there when the score presses outward). BootstrapWarmStartTest checks on many
      * replicates that both paths reach the same optimum.
      */

@@ -71,8 +71,8 @@ public final class NewtonScoring {
     }
 
     /**
-     * {@link #maximise(Objective, double[], double[])} from a start inside the box whose −ln L the caller has
-     * already (e.g. from shared log terms that give the same double as {@link Objective#value}).
+     * {@link #maximise(Objective, double[], double[])} from a start inside the box whose −ln L the caller already
+     * has (e.g. from shared log terms, which give the same double as {@link Objective#value}).
      */
     public static double[] maximise(Objective objective, double[] start, double startValue, double[] known) {
         return climb(objective, start, known, false, MAX_JUMPS, false, startValue);
@@ -82,7 +82,7 @@ public final class NewtonScoring {
      * The warm start of a refit from a nearby optimum (e.g. a bootstrap replicate from the estimate that
      * generated it): the same climb, but it reports success only on convergence, i.e. at a stationary point
      * of the free coordinates, with every held coordinate pressing against its bound, once the step has
-     * shrunk below rounding, or where ln L has gained less than {@value #STALL_GAIN} over {@value #STALL_WINDOW}
+     * shrunk below rounding, after a Newton step shorter than {@value #NEWTON_STEP}, or where ln L has gained less than {@value #STALL_GAIN} over {@value #STALL_WINDOW}
      * iterations while the iterate moved less than {@value #STALLED_MOVE}. A climb that creeps along a ridge, meets singular information (both matrices not
      * positive definite), runs out of iterations or cannot decrease −ln L returns null, so the caller can
      * fall back to the full multi-start search.
